@@ -1,0 +1,127 @@
+package org.beamfolio.analysis;
+
+/**
+ * Solves K d = f for a symmetric positive definite matrix stored as its upper band, by Cholesky
+ * factorisation restricted to the band: O(n b^2) work for n unknowns and half-bandwidth b. A beam's
+ * stiffness matrix, numbered left to right, has a half-bandwidth of three or four, so the solve is
+ * linear in the number of nodes.
+ */
+final class BandedSolver {
+    private final int n;
+    private final int bandwidth;
+    /** band[i][k] holds K[i][i + k]. */
+    private final double[][] band;
+    private final boolean[] restrained;
+
+    BandedSolver(int n, int bandwidth) {
+        this.n = n;
+        this.bandwidth = bandwidth;
+        this.band = new double[n][bandwidth + 1];
+        this.restrained = new boolean[n];
+    }
+
+    int size() {
+        return n;
+    }
+
+    void add(int i, int j, double value) {
+        int r = Math.min(i, j);
+        int k = Math.abs(i - j);
+        if (k > bandwidth) {
+            throw new IllegalArgumentException("entry outside the band: " + i + ", " + j);
+        }
+        band[r][k] += value;
+    }
+
+    double get(int i, int j) {
+        int k = Math.abs(i - j);
+        return k > bandwidth ? 0 : band[Math.min(i, j)][k];
+    }
+
+    /** Replaces row and column i by a diagonal entry alone, so that d[i] = 0: a restrained displacement. */
+    void restrain(int i) {
+        restrained[i] = true;
+        for (int k = 0; k <= bandwidth; k++) {
+            if (i + k < n) {
+                band[i][k] = 0;
+            }
+            if (i - k >= 0) {
+                band[i - k][k] = 0;
+            }
+        }
+    }
+
+    /** Thrown when a pivot is not positive: the structure is unstable or numerically singular. */
+    static final class NotPositiveDefinite extends Exception {
+        final int index;
+
+        NotPositiveDefinite(int index) {
+            super("stiffness matrix is singular at unknown " + index);
+            this.index = index;
+        }
+    }
+
+    /** Factorises in place and solves; the matrix cannot be reused. Returns the pivot ratio min/max. */
+    double[] solve(double[] f, double[] pivotRatio) throws NotPositiveDefinite {
+        double maxDiagonal = 0;
+        for (int i = 0; i < n; i++) {
+            maxDiagonal = Math.max(maxDiagonal, band[i][0]);
+        }
+        if (!(maxDiagonal > 0)) {
+            maxDiagonal = 1;
+        }
+        f = f.clone();
+        for (int i = 0; i < n; i++) {
+            if (restrained[i]) {
+                // scaled like the rest of the matrix, so the pivot test below is not misled
+                band[i][0] = maxDiagonal;
+                f[i] = 0;
+            }
+        }
+        double minPivot = Double.POSITIVE_INFINITY;
+        double maxPivot = 0;
+        // L^T L = K with L^T upper banded, stored over the band
+        for (int i = 0; i < n; i++) {
+            double diagonal = band[i][0];
+            for (int k = 1; k <= bandwidth && i - k >= 0; k++) {
+                diagonal -= band[i - k][k] * band[i - k][k];
+            }
+            if (!(diagonal > 1e-13 * maxDiagonal)) {
+                throw new NotPositiveDefinite(i);
+            }
+            double pivot = Math.sqrt(diagonal);
+            band[i][0] = pivot;
+            minPivot = Math.min(minPivot, diagonal);
+            maxPivot = Math.max(maxPivot, diagonal);
+            for (int j = 1; j <= bandwidth && i + j < n; j++) {
+                double sum = band[i][j];
+                for (int k = 1; k <= bandwidth && i - k >= 0; k++) {
+                    int offset = j + k;
+                    if (offset <= bandwidth) {
+                        sum -= band[i - k][k] * band[i - k][offset];
+                    }
+                }
+                band[i][j] = sum / pivot;
+            }
+        }
+        double[] y = f;
+        for (int i = 0; i < n; i++) {
+            double sum = y[i];
+            for (int k = 1; k <= bandwidth && i - k >= 0; k++) {
+                sum -= band[i - k][k] * y[i - k];
+            }
+            y[i] = sum / band[i][0];
+        }
+        for (int i = n - 1; i >= 0; i--) {
+            double sum = y[i];
+            for (int k = 1; k <= bandwidth && i + k < n; k++) {
+                sum -= band[i][k] * y[i + k];
+            }
+            y[i] = sum / band[i][0];
+        }
+        if (pivotRatio != null && pivotRatio.length > 0) {
+            pivotRatio[0] = minPivot / maxPivot;
+        }
+        return y;
+    }
+}

@@ -1,0 +1,174 @@
+package org.beamfolio.analysis;
+
+import java.util.List;
+import org.beamfolio.model.Load;
+import org.beamfolio.model.Support;
+import org.beamfolio.model.SupportKind;
+
+/**
+ * Solves one load case by the direct stiffness method on a {@link StructureModel}.
+ *
+ * <p>Element stiffness and consistent (work-equivalent) nodal loads are those of the cubic
+ * Hermite beam element; for Euler-Bernoulli elements with polynomial loads these give the exact
+ * nodal displacements. Within each element the fields then follow exactly from statics and
+ * integration of the elastic curve, from the element's end forces f = k d - f_eq:
+ * V(s) = F1 - integral of q, M(s) = -M1 + integral of V, slope = theta1 + integral of M / EI,
+ * v = v1 + integral of the slope. Signs inside: deflection v and forces positive up, rotations
+ * and couples counter-clockwise, loads q positive down; M positive sagging.
+ */
+final class CaseSolver {
+    private CaseSolver() {}
+
+    /** Per element, the downward line load as q(s) = q0 + q1 s. */
+    record ElementLoads(double[] q0, double[] q1, double[] nodalForce, double[] nodalCouple) {}
+
+    static ElementLoads loadsOf(StructureModel m, List<Load> loads) {
+        int elements = m.elements();
+        double[] q0 = new double[elements];
+        double[] q1 = new double[elements];
+        double[] force = new double[m.x.length];
+        double[] couple = new double[m.x.length];
+        for (Load load : loads) {
+            if (load instanceof Load.Point p) {
+                force[StructureModel.nodeAt(m.x, p.at())] -= p.P();
+            } else if (load instanceof Load.Couple c) {
+                couple[StructureModel.nodeAt(m.x, c.at())] += c.M();
+            } else if (load instanceof Load.Distributed d) {
+                int first = StructureModel.nodeAt(m.x, d.from());
+                int last = StructureModel.nodeAt(m.x, d.to());
+                double slope = (d.wEnd() - d.wStart()) / (d.to() - d.from());
+                for (int e = first; e < last; e++) {
+                    q0[e] += d.intensityAt(m.x[e]);
+                    q1[e] += slope;
+                }
+            }
+        }
+        return new ElementLoads(q0, q1, force, couple);
+    }
+
+    static Response solve(StructureModel m, ElementLoads loads, String name) throws BandedSolver.NotPositiveDefinite {
+        int elements = m.elements();
+        BandedSolver k = new BandedSolver(m.unknowns, 4);
+        double[] f = new double[m.unknowns];
+        double[][] feq = new double[elements][];
+        for (int e = 0; e < elements; e++) {
+            int[] dofs = dofs(m, e);
+            double[][] ke = stiffness(m.ei[e], m.x[e + 1] - m.x[e]);
+            feq[e] = equivalentLoads(m.x[e + 1] - m.x[e], loads.q0()[e], loads.q1()[e]);
+            for (int i = 0; i < 4; i++) {
+                f[dofs[i]] += feq[e][i];
+                for (int j = i; j < 4; j++) {
+                    k.add(dofs[i], dofs[j], ke[i][j]);
+                }
+            }
+        }
+        for (int node = 0; node < m.x.length; node++) {
+            f[m.v[node]] += loads.nodalForce()[node];
+            // a couple at a hinge acts on the part to the right of it
+            f[m.thetaRight[node]] += loads.nodalCouple()[node];
+        }
+        for (int s = 0; s < m.supports.size(); s++) {
+            int node = m.supportNode[s];
+            SupportKind kind = m.supports.get(s).kind();
+            if (kind instanceof SupportKind.Spring spring) {
+                k.add(m.v[node], m.v[node], spring.k());
+                if (spring.kr() > 0) {
+                    k.add(m.thetaLeft[node], m.thetaLeft[node], spring.kr());
+                }
+            } else {
+                k.restrain(m.v[node]);
+                if (kind instanceof SupportKind.Fixed) {
+                    k.restrain(m.thetaLeft[node]);
+                }
+            }
+        }
+        double[] ratio = new double[1];
+        double[] d = k.solve(f, ratio);
+        return fields(m, loads, feq, d, name, ratio[0]);
+    }
+
+    private static Response fields(StructureModel m, ElementLoads loads, double[][] feq, double[] d, String name,
+                                   double pivotRatio) {
+        int elements = m.elements();
+        Polynomial[] shear = new Polynomial[elements];
+        Polynomial[] moment = new Polynomial[elements];
+        Polynomial[] slope = new Polynomial[elements];
+        Polynomial[] deflection = new Polynomial[elements];
+        double[] nodeForce = new double[m.x.length];
+        double[] nodeCouple = new double[m.x.length];
+        for (int e = 0; e < elements; e++) {
+            double length = m.x[e + 1] - m.x[e];
+            int[] dofs = dofs(m, e);
+            double[][] ke = stiffness(m.ei[e], length);
+            double[] end = new double[4];
+            for (int i = 0; i < 4; i++) {
+                double sum = -feq[e][i];
+                for (int j = 0; j < 4; j++) {
+                    sum += ke[i][j] * d[dofs[j]];
+                }
+                end[i] = sum;
+            }
+            nodeForce[e] += end[0];
+            nodeCouple[e] += end[1];
+            nodeForce[e + 1] += end[2];
+            nodeCouple[e + 1] += end[3];
+            Polynomial q = Polynomial.of(loads.q0()[e], loads.q1()[e]);
+            shear[e] = q.integral(0).times(-1).plus(Polynomial.of(end[0]));
+            moment[e] = shear[e].integral(-end[1]);
+            slope[e] = moment[e].times(1 / m.ei[e]).integral(d[dofs[1]]);
+            Polynomial up = slope[e].integral(d[dofs[0]]);
+            deflection[e] = up.times(-1);
+        }
+        int supports = m.supports.size();
+        double[] reactionForce = new double[supports];
+        double[] reactionMoment = new double[supports];
+        for (int s = 0; s < supports; s++) {
+            int node = m.supportNode[s];
+            Support support = m.supports.get(s);
+            // node equilibrium: reaction + applied load = what the elements draw from the node
+            reactionForce[s] = nodeForce[node] - loads.nodalForce()[node];
+            if (support.kind() instanceof SupportKind.Fixed
+                    || (support.kind() instanceof SupportKind.Spring sp && sp.kr() > 0)) {
+                reactionMoment[s] = nodeCouple[node] - loads.nodalCouple()[node];
+            }
+        }
+        double[] starts = m.elementStarts();
+        double[] ends = m.elementEnds();
+        return new Response(name, reactionForce, reactionMoment, new Field(starts, ends, shear),
+                new Field(starts, ends, moment), new Field(starts, ends, slope), new Field(starts, ends, deflection),
+                pivotRatio);
+    }
+
+    private static int[] dofs(StructureModel m, int e) {
+        return new int[] {m.v[e], m.thetaRight[e], m.v[e + 1], m.thetaLeft[e + 1]};
+    }
+
+    static double[][] stiffness(double ei, double l) {
+        double a = ei / (l * l * l);
+        return new double[][] {
+            {12 * a, 6 * l * a, -12 * a, 6 * l * a},
+            {6 * l * a, 4 * l * l * a, -6 * l * a, 2 * l * l * a},
+            {-12 * a, -6 * l * a, 12 * a, -6 * l * a},
+            {6 * l * a, 2 * l * l * a, -6 * l * a, 4 * l * l * a}
+        };
+    }
+
+    /**
+     * Work-equivalent nodal loads (up and counter-clockwise positive) of a downward load
+     * q0 + q1 s: minus the integral of each Hermite shape function times q.
+     */
+    static double[] equivalentLoads(double l, double q0, double q1) {
+        Polynomial q = Polynomial.of(q0, q1);
+        Polynomial[] shape = {
+            Polynomial.of(1, 0, -3 / (l * l), 2 / (l * l * l)),
+            Polynomial.of(0, 1, -2 / l, 1 / (l * l)),
+            Polynomial.of(0, 0, 3 / (l * l), -2 / (l * l * l)),
+            Polynomial.of(0, 0, -1 / l, 1 / (l * l))
+        };
+        double[] result = new double[4];
+        for (int i = 0; i < 4; i++) {
+            result[i] = -shape[i].times(q).integrate(l);
+        }
+        return result;
+    }
+}

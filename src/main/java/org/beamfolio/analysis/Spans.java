@@ -1,0 +1,101 @@
+package org.beamfolio.analysis;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.beamfolio.model.Beam;
+import org.beamfolio.model.Load;
+
+/**
+ * The beam's regions for pattern loading: each span between two supports, and an overhang
+ * beyond the first or last support, numbered left to right; and a case's loads cut at their
+ * borders, so each region's share can be solved alone.
+ */
+final class Spans {
+    private Spans() {}
+
+    static List<AnalysisResult.Span> of(Beam beam) {
+        List<AnalysisResult.Span> spans = new ArrayList<>();
+        double tolerance = 1e-9 * beam.length();
+        List<Double> at = beam.supports().stream().map(s -> s.at()).toList();
+        if (at.get(0) > tolerance) {
+            spans.add(new AnalysisResult.Span("left overhang", 0, at.get(0)));
+        }
+        for (int i = 0; i + 1 < at.size(); i++) {
+            spans.add(new AnalysisResult.Span("span " + (i + 1), at.get(i), at.get(i + 1)));
+        }
+        if (beam.length() - at.get(at.size() - 1) > tolerance) {
+            spans.add(new AnalysisResult.Span("right overhang", at.get(at.size() - 1), beam.length()));
+        }
+        return spans;
+    }
+
+    /** The part of each load that lies in [from, to); a point load on a border goes to the region on its right. */
+    static List<Load> within(List<Load> loads, double from, double to, boolean last) {
+        List<Load> result = new ArrayList<>();
+        for (Load load : loads) {
+            if (load instanceof Load.Point p && inside(p.at(), from, to, last)) {
+                result.add(p);
+            } else if (load instanceof Load.Couple c && inside(c.at(), from, to, last)) {
+                result.add(c);
+            } else if (load instanceof Load.Distributed d) {
+                double a = Math.max(from, d.from());
+                double b = Math.min(to, d.to());
+                if (b > a) {
+                    result.add(new Load.Distributed(d.loadCase(), d.intensityAt(a), d.intensityAt(b), a, b, d.uniform(),
+                            d.note(), d.where()));
+                }
+            }
+        }
+        return result;
+    }
+
+    private static boolean inside(double x, double from, double to, boolean last) {
+        return x >= from && (x < to || (last && x <= to));
+    }
+
+    /**
+     * The loaded-span arrangements to examine. Up to six regions: every non-empty subset but the
+     * full one (which is the combination itself). Beyond that, the arrangements that give the
+     * extreme moments and shears of a continuous beam on rigid supports (common practice, as in
+     * ACI 318-19 6.4.3): alternate regions loaded (both ways), and for each support two adjacent
+     * regions loaded with alternate regions beyond them; plus each region alone.
+     */
+    static List<boolean[]> arrangements(int regions) {
+        List<boolean[]> result = new ArrayList<>();
+        if (regions <= 6) {
+            for (int mask = 1; mask < (1 << regions) - 1; mask++) {
+                boolean[] loaded = new boolean[regions];
+                for (int i = 0; i < regions; i++) {
+                    loaded[i] = (mask & (1 << i)) != 0;
+                }
+                result.add(loaded);
+            }
+            return result;
+        }
+        for (int parity = 0; parity < 2; parity++) {
+            boolean[] loaded = new boolean[regions];
+            for (int i = parity; i < regions; i += 2) {
+                loaded[i] = true;
+            }
+            result.add(loaded);
+        }
+        for (int i = 0; i + 1 < regions; i++) {
+            boolean[] loaded = new boolean[regions];
+            loaded[i] = true;
+            loaded[i + 1] = true;
+            for (int j = i - 2; j >= 0; j -= 2) {
+                loaded[j] = true;
+            }
+            for (int j = i + 3; j < regions; j += 2) {
+                loaded[j] = true;
+            }
+            result.add(loaded);
+        }
+        for (int i = 0; i < regions; i++) {
+            boolean[] loaded = new boolean[regions];
+            loaded[i] = true;
+            result.add(loaded);
+        }
+        return result;
+    }
+}

@@ -1,0 +1,45 @@
+package org.beamfolio.cli;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.concurrent.Callable;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Parameters;
+
+/** {@code check JOB...}: validates and solves each job and prints a summary; writes nothing. */
+@Command(name = "check", mixinStandardHelpOptions = true,
+        description = "Validate and solve each job and print a one-screen summary; no files are written.")
+final class CheckCommand implements Callable<Integer> {
+    @Parameters(arity = "1..*", paramLabel = "JOB", description = "job files, or folders of *.yaml job files")
+    List<Path> jobs;
+
+    @CommandLine.Spec
+    CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public Integer call() throws IOException {
+        PrintWriter stdout = spec.commandLine().getOut();
+        PrintWriter stderr = spec.commandLine().getErr();
+        List<Path> files = JobFiles.expand(jobs);
+        if (files.isEmpty()) {
+            stderr.println("beamfolio: no job files found in " + jobs);
+            return Main.BAD_INPUT;
+        }
+        ExitStatus status = new ExitStatus();
+        Pipeline pipeline = new Pipeline();
+        for (Path file : files) {
+            Pipeline.Solved solved = pipeline.solve(file);
+            solved.messages().forEach(stderr::print);
+            if (solved.status() == Main.OK) {
+                stdout.print(Summary.of(solved.result(), solved.checks()));
+            }
+            status.add(solved.status());
+        }
+        stdout.flush();
+        stderr.flush();
+        return status.get();
+    }
+}

@@ -1,0 +1,57 @@
+package org.beamfolio.cli;
+
+import java.io.PrintStream;
+import java.io.PrintWriter;
+import java.nio.charset.StandardCharsets;
+import org.beamfolio.results.Version;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+
+/**
+ * The command line. {@link #run} takes its streams and returns the exit status, so tests run it
+ * in-process: 0 when every package was written (or every job checked), 2 when any input was
+ * invalid (nothing is written for that job), 1 on an internal failure.
+ */
+@Command(name = "beamfolio", mixinStandardHelpOptions = true, versionProvider = Main.VersionProvider.class,
+        description = "Exact beam analysis and calculation packages for structural engineers.",
+        subcommands = {BuildCommand.class, CheckCommand.class, CommandLine.HelpCommand.class})
+public final class Main implements Runnable {
+    public static final int OK = 0;
+    public static final int INTERNAL_FAILURE = 1;
+    public static final int BAD_INPUT = 2;
+
+    @CommandLine.Spec
+    CommandLine.Model.CommandSpec spec;
+
+    public static void main(String[] args) {
+        System.exit(run(args, System.out, System.err));
+    }
+
+    public static int run(String[] args, PrintStream out, PrintStream err) {
+        CommandLine cli = new CommandLine(new Main());
+        cli.setOut(new PrintWriter(out, true, StandardCharsets.UTF_8));
+        cli.setErr(new PrintWriter(err, true, StandardCharsets.UTF_8));
+        cli.setParameterExceptionHandler((e, a) -> {
+            e.getCommandLine().getErr().println("beamfolio: " + e.getMessage());
+            e.getCommandLine().usage(e.getCommandLine().getErr());
+            return BAD_INPUT;
+        });
+        cli.setExecutionExceptionHandler((e, c, r) -> {
+            c.getErr().println("beamfolio: internal failure: " + e);
+            return INTERNAL_FAILURE;
+        });
+        return cli.execute(args);
+    }
+
+    @Override
+    public void run() {
+        spec.commandLine().usage(spec.commandLine().getOut());
+    }
+
+    static final class VersionProvider implements CommandLine.IVersionProvider {
+        @Override
+        public String[] getVersion() {
+            return new String[] {"beamfolio " + Version.get()};
+        }
+    }
+}

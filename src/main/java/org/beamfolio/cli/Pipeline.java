@@ -1,0 +1,70 @@
+package org.beamfolio.cli;
+
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import org.beamfolio.analysis.Analysis;
+import org.beamfolio.analysis.AnalysisResult;
+import org.beamfolio.analysis.Instability;
+import org.beamfolio.analysis.UnstableBeamException;
+import org.beamfolio.checks.Checks;
+import org.beamfolio.job.Diagnostic;
+import org.beamfolio.job.JobReader;
+import org.beamfolio.job.JobReading;
+import org.beamfolio.report.PackageRenderer;
+import org.beamfolio.results.CheckOutcome;
+import org.beamfolio.results.ResultsWriter;
+
+/**
+ * One job from file to package: read and validate, analyse, check, then write the results file
+ * and the PDF. Both are rendered in memory first and moved into place only when both are
+ * complete, so bad input or a failure never leaves half a package or replaces a good one.
+ */
+final class Pipeline {
+    private final PackageRenderer renderer = new PackageRenderer();
+
+    record Outcome(int status, List<String> messages, Path pdf, Path results) {}
+
+    /** The job read and solved, or the messages that say why it cannot be. */
+    record Solved(AnalysisResult result, List<CheckOutcome> checks, List<String> messages, int status) {}
+
+    Solved solve(Path file) {
+        JobReading reading = JobReader.read(file);
+        if (!reading.ok()) {
+            return new Solved(null, List.of(), List.of(reading.report()), Main.BAD_INPUT);
+        }
+        try {
+            AnalysisResult result = Analysis.run(reading.job());
+            return new Solved(result, Checks.run(result), List.of(), Main.OK);
+        } catch (UnstableBeamException e) {
+            Instability i = e.instability();
+            Diagnostic d = new Diagnostic(reading.file(), i.where(), i.keyPath(), i.message());
+            return new Solved(null, List.of(), List.of(d.render(reading.source()) + "\n"), Main.BAD_INPUT);
+        }
+    }
+
+    Outcome build(Path file, Path outDir) {
+        Solved solved = solve(file);
+        if (solved.status() != Main.OK) {
+            return new Outcome(solved.status(), solved.messages(), null, null);
+        }
+        String name = solved.result().job().name();
+        Path pdf = outDir.resolve(name + ".pdf");
+        Path results = outDir.resolve(name + ".results.json");
+        List<String> messages = new ArrayList<>();
+        try {
+            byte[] json = ResultsWriter.write(solved.result(), solved.checks()).getBytes(StandardCharsets.UTF_8);
+            byte[] document = renderer.render(solved.result(), solved.checks());
+            Files.createDirectories(outDir);
+            AtomicFiles.writeTogether(List.of(results, pdf), List.of(json, document));
+        } catch (IOException | RuntimeException e) {
+            messages.add(file + ": internal failure while writing the package: " + e + "\n"
+                    + "  nothing was written; an earlier package of the same name is unchanged\n");
+            return new Outcome(Main.INTERNAL_FAILURE, messages, null, null);
+        }
+        return new Outcome(Main.OK, messages, pdf, results);
+    }
+}

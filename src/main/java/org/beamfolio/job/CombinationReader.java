@@ -1,0 +1,222 @@
+package org.beamfolio.job;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+import org.beamfolio.combinations.BuiltInSets;
+import org.beamfolio.combinations.CombinationSet;
+import org.beamfolio.model.Beam;
+import org.beamfolio.model.Combination;
+import org.beamfolio.model.DeflectionLimit;
+import org.beamfolio.model.Load;
+import org.beamfolio.units.Dimension;
+import org.beamfolio.units.Suggest;
+
+/** Reads what depends on the load cases: combinations, pattern loading and the checks. */
+final class CombinationReader {
+    static final int MAX_COMBINATIONS = 500;
+    private static final Pattern SPAN_RATIO = Pattern.compile("\\s*L\\s*/\\s*(\\d+(?:\\.\\d+)?)\\s*");
+
+    private CombinationReader() {}
+
+    record Outcome(String setName, List<Combination> combinations, List<String> pattern, boolean stressCheck,
+                   List<DeflectionLimit> deflection) {}
+
+    static Outcome read(ReadContext c, ReadContext.Fields top, List<Load> loads, Beam beam) {
+        Set<String> used = new LinkedHashSet<>();
+        loads.forEach(l -> used.add(l.loadCase()));
+        if (beam != null && beam.selfWeightCase() != null) {
+            used.add(beam.selfWeightCase());
+        }
+        String setName = null;
+        List<Combination> combinations = new ArrayList<>();
+        YamlNode node = top.optional("combinations");
+        if (node == null) {
+            combinations.addAll(defaults(used));
+        } else if (node instanceof YamlNode.Scalar) {
+            setName = c.choice(node, "combinations", BuiltInSets.names());
+            if (setName != null) {
+                CombinationSet set = BuiltInSets.find(setName).orElseThrow();
+                for (String loadCase : used) {
+                    if (!set.cases().contains(loadCase)) {
+                        c.error(node, "combinations", "loads of case \"" + loadCase + "\" appear in no combination of " + setName
+                                + " (its cases: " + String.join(", ", new java.util.TreeSet<>(set.cases()))
+                                + "): rename the case or give an explicit list of combinations");
+                    }
+                }
+            }
+        } else {
+            explicit(c, node, used, combinations);
+        }
+        List<String> pattern = pattern(c, top.optional("pattern"), used, beam);
+        boolean stress = false;
+        List<DeflectionLimit> deflection = new ArrayList<>();
+        YamlNode checks = top.optional("checks");
+        if (checks != null) {
+            ReadContext.Fields f = c.fields(checks, "checks");
+            if (f != null) {
+                YamlNode s = f.optional("stress");
+                if (s != null) {
+                    Boolean value = c.bool(s, f.path("stress"));
+                    stress = value != null && value;
+                }
+                List<YamlNode> items = JobReader.listOrEmpty(c, f.optional("deflection"), f.path("deflection"));
+                if (items != null) {
+                    for (int i = 0; i < items.size(); i++) {
+                        DeflectionLimit limit = deflectionLimit(c, items.get(i), f.path("deflection") + "[" + i + "]", used);
+                        if (limit != null) {
+                            deflection.add(limit);
+                        }
+                    }
+                }
+                f.rejectUnknown();
+            }
+        }
+        return new Outcome(setName, combinations, pattern, stress, deflection);
+    }
+
+    /** Without a combinations key: each case alone and, with more than one case, all of them together. */
+    private static List<Combination> defaults(Set<String> used) {
+        List<Combination> result = new ArrayList<>();
+        Map<String, Double> all = new LinkedHashMap<>();
+        for (String loadCase : used) {
+            result.add(new Combination(loadCase, Map.of(loadCase, 1.0)));
+            all.put(loadCase, 1.0);
+        }
+        if (used.size() > 1) {
+            result.add(new Combination(String.join(" + ", used), all));
+        }
+        return result;
+    }
+
+    private static void explicit(ReadContext c, YamlNode node, Set<String> used, List<Combination> out) {
+        List<YamlNode> items = c.list(node, "combinations").orElse(null);
+        if (items == null) {
+            return;
+        }
+        if (items.isEmpty()) {
+            c.error(node, "combinations", "the list is empty: name a built-in set (" + String.join(", ", BuiltInSets.names())
+                    + ") or list at least one combination");
+        }
+        if (items.size() > MAX_COMBINATIONS) {
+            c.error(node, "combinations", "too many combinations: " + items.size() + " (at most " + MAX_COMBINATIONS + ")");
+            return;
+        }
+        Set<String> names = new LinkedHashSet<>();
+        for (int i = 0; i < items.size(); i++) {
+            String path = "combinations[" + i + "]";
+            ReadContext.Fields f = c.fields(items.get(i), path);
+            if (f == null) {
+                continue;
+            }
+            YamlNode nameNode = f.required("name");
+            String name = nameNode == null ? null : c.id(nameNode, f.path("name"));
+            if (name != null && !names.add(name)) {
+                c.error(nameNode, f.path("name"), "two combinations are named \"" + name + "\"");
+            }
+            YamlNode factorsNode = f.required("factors");
+            Map<String, Double> factors = new LinkedHashMap<>();
+            ReadContext.Fields ff = factorsNode == null ? null : c.fields(factorsNode, f.path("factors"));
+            if (ff != null) {
+                if (ff.node().entries().isEmpty()) {
+                    c.error(factorsNode, f.path("factors"), "no factors: give at least one case and its factor");
+                }
+                for (YamlNode.Entry entry : ff.node().entries().values()) {
+                    ff.optional(entry.key());
+                    if (!used.contains(entry.key())) {
+                        c.error(entry.keyLocation(), ff.path(entry.key()), unusedCase(entry.key(), used));
+                        continue;
+                    }
+                    Double factor = c.number(entry.value(), ff.path(entry.key()));
+                    if (factor != null) {
+                        factors.put(entry.key(), factor);
+                    }
+                }
+            }
+            f.rejectUnknown();
+            if (name != null && !factors.isEmpty()) {
+                out.add(new Combination(name, factors));
+            }
+        }
+    }
+
+    static String unusedCase(String loadCase, Set<String> used) {
+        String hint = Suggest.closest(loadCase, used).map(s -> "; did you mean \"" + s + "\"?").orElse("");
+        return "no load uses case \"" + loadCase + "\"" + hint + (used.isEmpty() ? "" : " (cases with loads: " + String.join(", ", used) + ")");
+    }
+
+    private static List<String> pattern(ReadContext c, YamlNode node, Set<String> used, Beam beam) {
+        List<String> result = new ArrayList<>();
+        List<YamlNode> items = JobReader.listOrEmpty(c, node, "pattern");
+        if (items == null) {
+            return result;
+        }
+        for (int i = 0; i < items.size(); i++) {
+            String id = c.id(items.get(i), "pattern[" + i + "]");
+            if (id == null) {
+                continue;
+            }
+            if (!used.contains(id)) {
+                c.error(items.get(i), "pattern[" + i + "]", unusedCase(id, used));
+            } else if (!result.contains(id)) {
+                result.add(id);
+            }
+        }
+        if (!items.isEmpty() && beam != null && beam.supports().size() < 3) {
+            c.error(node, "pattern", "pattern loading needs a beam of two or more spans between supports; this beam has "
+                    + Math.max(0, beam.supports().size() - 1) + " (remove \"pattern\")");
+        }
+        return result;
+    }
+
+    private static DeflectionLimit deflectionLimit(ReadContext c, YamlNode node, String path, Set<String> used) {
+        ReadContext.Fields f = c.fields(node, path);
+        if (f == null) {
+            return null;
+        }
+        List<String> cases = new ArrayList<>();
+        YamlNode casesNode = f.required("cases");
+        List<YamlNode> items = casesNode == null ? null : c.list(casesNode, f.path("cases")).orElse(null);
+        if (items != null) {
+            if (items.isEmpty()) {
+                c.error(casesNode, f.path("cases"), "name at least one load case");
+            }
+            for (int i = 0; i < items.size(); i++) {
+                String id = c.id(items.get(i), f.path("cases") + "[" + i + "]");
+                if (id != null && !used.contains(id)) {
+                    c.error(items.get(i), f.path("cases") + "[" + i + "]", unusedCase(id, used));
+                } else if (id != null) {
+                    cases.add(id);
+                }
+            }
+        }
+        YamlNode limitNode = f.optional("limit");
+        YamlNode maxNode = f.optional("max");
+        Double ratio = null;
+        Double max = null;
+        if ((limitNode == null) == (maxNode == null)) {
+            c.error(node, path, "give either \"limit\" (a span ratio such as L/360) or \"max\" (a length such as 0.75 in), not "
+                    + (limitNode == null ? "neither" : "both"));
+        } else if (limitNode != null) {
+            String text = c.text(limitNode, f.path("limit"));
+            Matcher m = text == null ? null : SPAN_RATIO.matcher(text);
+            if (m != null && m.matches() && Double.parseDouble(m.group(1)) > 0) {
+                ratio = Double.parseDouble(m.group(1));
+            } else if (text != null) {
+                c.error(limitNode, f.path("limit"), "expected a span ratio such as L/360, got \"" + text + "\"");
+            }
+        } else {
+            max = c.positive(maxNode, f.path("max"), Dimension.LENGTH);
+        }
+        f.rejectUnknown();
+        if (cases.isEmpty() || (ratio == null && max == null)) {
+            return null;
+        }
+        return new DeflectionLimit(cases, ratio, max);
+    }
+}

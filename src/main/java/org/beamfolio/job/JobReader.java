@@ -1,0 +1,272 @@
+package org.beamfolio.job;
+
+import java.io.IOException;
+import java.nio.ByteBuffer;
+import java.nio.charset.CharacterCodingException;
+import java.nio.charset.CodingErrorAction;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.security.MessageDigest;
+import java.security.NoSuchAlgorithmException;
+import java.util.ArrayList;
+import java.util.HexFormat;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import org.beamfolio.model.Beam;
+import org.beamfolio.model.Job;
+import org.beamfolio.model.Load;
+import org.beamfolio.model.Material;
+import org.beamfolio.model.Project;
+import org.beamfolio.model.ReportSettings;
+import org.beamfolio.model.Section;
+import org.beamfolio.units.Dimension;
+
+/**
+ * Reads a format 1 job file into a validated {@link Job}, or into the complete list of what is
+ * wrong with it, each with its line, column and key path. Nothing here throws for bad input.
+ */
+public final class JobReader {
+    /** Job files larger than this are refused before parsing. */
+    public static final long MAX_FILE_BYTES = 4L * 1024 * 1024;
+
+    private JobReader() {}
+
+    public static JobReading read(Path file) {
+        String label = file.toString();
+        if (Files.isDirectory(file)) {
+            return failed(label, null, "is a folder, not a job file");
+        }
+        try {
+            long size = Files.size(file);
+            if (size > MAX_FILE_BYTES) {
+                return failed(label, null, "the file is " + size + " bytes; job files are limited to " + MAX_FILE_BYTES + " bytes");
+            }
+            return read(label, jobName(file), Files.readAllBytes(file));
+        } catch (IOException e) {
+            return failed(label, null, "cannot read the file: " + e.getMessage());
+        }
+    }
+
+    /** The job's name: its file name without the .yaml or .yml ending. */
+    public static String jobName(Path file) {
+        String name = file.getFileName().toString();
+        return name.replaceFirst("\\.(yaml|yml)$", "");
+    }
+
+    public static JobReading read(String label, String name, byte[] bytes) {
+        String text;
+        try {
+            text = StandardCharsets.UTF_8.newDecoder()
+                    .onMalformedInput(CodingErrorAction.REPORT)
+                    .onUnmappableCharacter(CodingErrorAction.REPORT)
+                    .decode(ByteBuffer.wrap(bytes)).toString();
+        } catch (CharacterCodingException e) {
+            return new JobReading(label, null, null, List.of(new Diagnostic(label, firstBadByte(bytes), "",
+                    "the file is not UTF-8 text (save it as UTF-8)")));
+        }
+        if (text.startsWith("\uFEFF")) {
+            text = text.substring(1);
+        }
+        ReadContext context = new ReadContext(label);
+        YamlNode root;
+        try {
+            root = new YamlTreeReader().read(text, context.diagnostics(), label);
+        } catch (YamlTreeReader.SyntaxError e) {
+            return new JobReading(label, text, null, List.of(new Diagnostic(label, e.location, "", e.getMessage())));
+        }
+        Job job = new JobReader.Walk(context, name, text, sha256(bytes)).job(root);
+        return new JobReading(label, text, context.diagnostics().isEmpty() ? job : null, context.diagnostics());
+    }
+
+    private static JobReading failed(String label, String source, String message) {
+        return new JobReading(label, source, null, List.of(new Diagnostic(label, Location.START, "", message)));
+    }
+
+    private static Location firstBadByte(byte[] bytes) {
+        int line = 1;
+        int column = 1;
+        var decoder = StandardCharsets.UTF_8.newDecoder().onMalformedInput(CodingErrorAction.REPORT);
+        for (int i = 0; i < bytes.length; ) {
+            int b = bytes[i] & 0xff;
+            int length = b < 0x80 ? 1 : b >= 0xf0 ? 4 : b >= 0xe0 ? 3 : b >= 0xc0 ? 2 : 1;
+            try {
+                decoder.reset().decode(ByteBuffer.wrap(bytes, i, Math.min(length, bytes.length - i)));
+            } catch (CharacterCodingException e) {
+                return new Location(line, column);
+            }
+            if (b == '\n') {
+                line++;
+                column = 1;
+            } else {
+                column++;
+            }
+            i += length;
+        }
+        return new Location(line, column);
+    }
+
+    public static String sha256(byte[] bytes) {
+        try {
+            return HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256").digest(bytes));
+        } catch (NoSuchAlgorithmException e) {
+            throw new IllegalStateException("SHA-256 is part of every Java platform", e);
+        }
+    }
+
+    /** One walk over the tree; each part of the file has its own reader. */
+    private static final class Walk {
+        private final ReadContext context;
+        private final String name;
+        private final String text;
+        private final String digest;
+
+        Walk(ReadContext context, String name, String text, String digest) {
+            this.context = context;
+            this.name = name;
+            this.text = text;
+            this.digest = digest;
+        }
+
+        Job job(YamlNode root) {
+            ReadContext.Fields top = context.fields(root, "");
+            if (top == null) {
+                return null;
+            }
+            YamlNode version = top.required("beamfolio");
+            if (version != null && !(version instanceof YamlNode.Scalar s && s.text().equals("1"))) {
+                context.error(version, "beamfolio", "unsupported format version: this tool reads format 1 (write \"beamfolio: 1\")");
+            }
+            Project project = ProjectReader.read(context, top.required("project"));
+            ReportSettings report = ProjectReader.report(context, top.optional("report"));
+            Map<String, Material> materials = materials(top.required("materials"));
+            Map<String, Section> sections = SectionReader.readAll(context, top.required("sections"));
+            Beam beam = BeamReader.read(context, top.required("beam"), materials, sections);
+            List<Load> loads = LoadReader.readAll(context, top.optional("loads"), beam);
+            Map<String, String> cases = cases(top.optional("cases"));
+            CombinationReader.Outcome combos = CombinationReader.read(context, top, loads, beam);
+            if (combos != null && combos.stressCheck() && beam != null) {
+                requireAllowables(top, materials, beam);
+            }
+            top.rejectUnknown();
+            if (!context.diagnostics().isEmpty() || project == null || beam == null || combos == null) {
+                return null;
+            }
+            return new Job(name, text, digest, project, report, materials, sections, beam, loads, cases,
+                    combos.setName(), combos.combinations(), combos.pattern(), combos.stressCheck(), combos.deflection());
+        }
+
+        /** A stress check compares with the allowables, so every material on the beam must give them. */
+        private void requireAllowables(ReadContext.Fields top, Map<String, Material> materials, Beam beam) {
+            java.util.Set<String> used = new java.util.LinkedHashSet<>();
+            used.add(beam.material());
+            beam.segments().forEach(s -> used.add(s.material()));
+            YamlNode checks = top.optional("checks");
+            for (String id : used) {
+                Material m = materials.get(id);
+                if (m == null) {
+                    continue;
+                }
+                List<String> missing = new ArrayList<>();
+                if (m.allowableTension() == null) {
+                    missing.add("tension");
+                }
+                if (m.allowableCompression() == null) {
+                    missing.add("compression");
+                }
+                if (m.allowableShear() == null) {
+                    missing.add("shear");
+                }
+                if (!missing.isEmpty()) {
+                    YamlNode at = checks instanceof YamlNode.Mapping map && map.entries().containsKey("stress")
+                            ? map.entries().get("stress").value() : checks;
+                    context.error(at, "checks.stress", "the stress check needs allowable " + String.join(", ", missing)
+                            + " stress for material \"" + id + "\" (add materials." + id + ".allowable)");
+                }
+            }
+        }
+
+        private Map<String, Material> materials(YamlNode node) {
+            Map<String, Material> result = new LinkedHashMap<>();
+            if (node == null) {
+                return result;
+            }
+            ReadContext.Fields all = context.fields(node, "materials");
+            if (all == null) {
+                return result;
+            }
+            if (all.node().entries().isEmpty()) {
+                context.error(node, "materials", "at least one material is needed");
+            }
+            for (YamlNode.Entry entry : all.node().entries().values()) {
+                all.optional(entry.key());
+                String path = "materials." + entry.key();
+                ReadContext.Fields f = context.fields(entry.value(), path);
+                if (f == null) {
+                    continue;
+                }
+                Double e = req(f, "E", Dimension.STRESS);
+                Double density = opt(f, "density", Dimension.WEIGHT_DENSITY);
+                Double tension = null;
+                Double compression = null;
+                Double shear = null;
+                YamlNode allowable = f.optional("allowable");
+                if (allowable != null) {
+                    ReadContext.Fields a = context.fields(allowable, f.path("allowable"));
+                    if (a != null) {
+                        tension = opt(a, "tension", Dimension.STRESS);
+                        compression = opt(a, "compression", Dimension.STRESS);
+                        shear = opt(a, "shear", Dimension.STRESS);
+                        a.rejectUnknown();
+                    }
+                }
+                YamlNode source = f.optional("source");
+                String sourceText = source == null ? "" : context.text(source, f.path("source"));
+                f.rejectUnknown();
+                if (e != null) {
+                    result.put(entry.key(), new Material(entry.key(), e, density, tension, compression, shear,
+                            sourceText == null ? "" : sourceText));
+                }
+            }
+            return result;
+        }
+
+        private Double req(ReadContext.Fields f, String key, Dimension dimension) {
+            YamlNode node = f.required(key);
+            return node == null ? null : context.positive(node, f.path(key), dimension);
+        }
+
+        private Double opt(ReadContext.Fields f, String key, Dimension dimension) {
+            YamlNode node = f.optional(key);
+            return node == null ? null : context.positive(node, f.path(key), dimension);
+        }
+
+        private Map<String, String> cases(YamlNode node) {
+            Map<String, String> result = new LinkedHashMap<>();
+            if (node == null) {
+                return result;
+            }
+            ReadContext.Fields f = context.fields(node, "cases");
+            if (f == null) {
+                return result;
+            }
+            for (YamlNode.Entry entry : f.node().entries().values()) {
+                f.optional(entry.key());
+                String description = context.text(entry.value(), f.path(entry.key()));
+                if (description != null) {
+                    result.put(entry.key(), description);
+                }
+            }
+            return result;
+        }
+    }
+
+    /** The list form of an optional sequence: empty when absent, null when not a list. */
+    static List<YamlNode> listOrEmpty(ReadContext context, YamlNode node, String path) {
+        if (node == null) {
+            return new ArrayList<>();
+        }
+        return context.list(node, path).orElse(null);
+    }
+}

@@ -1,0 +1,213 @@
+package org.beamfolio.job;
+
+import java.util.ArrayList;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Optional;
+import java.util.Set;
+import org.beamfolio.units.Dimension;
+import org.beamfolio.units.QuantityParser;
+import org.beamfolio.units.Suggest;
+
+/**
+ * What every part of the job reader shares: the file's name, the diagnostics found so far, and
+ * the small typed readers that turn a located YAML node into a value or a located message.
+ * A reader that finds a problem records it and returns null, so that reading goes on and every
+ * mistake in the file is reported together.
+ */
+final class ReadContext {
+    private final String file;
+    private final List<Diagnostic> diagnostics = new ArrayList<>();
+
+    ReadContext(String file) {
+        this.file = file;
+    }
+
+    String file() {
+        return file;
+    }
+
+    List<Diagnostic> diagnostics() {
+        return diagnostics;
+    }
+
+    void error(YamlNode at, String path, String message) {
+        error(at.location(), path, message);
+    }
+
+    void error(Location at, String path, String message) {
+        diagnostics.add(new Diagnostic(file, at, path, message));
+    }
+
+    /** A mapping, or a message saying what stood there instead. */
+    Fields fields(YamlNode node, String path) {
+        if (node instanceof YamlNode.Mapping m) {
+            return new Fields(this, m, path);
+        }
+        error(node, path, "expected a mapping of keys and values, got " + node.describe());
+        return null;
+    }
+
+    Optional<List<YamlNode>> list(YamlNode node, String path) {
+        if (node instanceof YamlNode.Sequence s) {
+            return Optional.of(s.items());
+        }
+        error(node, path, "expected a list, got " + node.describe());
+        return Optional.empty();
+    }
+
+    /** Free text: a string, or a bare number or date that YAML typed otherwise, kept as written. */
+    String text(YamlNode node, String path) {
+        if (node instanceof YamlNode.Scalar s) {
+            return s.kind() == YamlNode.Scalar.Kind.NULL ? "" : s.text();
+        }
+        error(node, path, "expected text, got " + node.describe());
+        return null;
+    }
+
+    /** An identifier: non-empty text without surrounding blanks. */
+    String id(YamlNode node, String path) {
+        String text = text(node, path);
+        if (text == null) {
+            return null;
+        }
+        if (text.isBlank()) {
+            error(node, path, "must not be empty");
+            return null;
+        }
+        return text.strip();
+    }
+
+    Boolean bool(YamlNode node, String path) {
+        if (node instanceof YamlNode.Scalar s && s.kind() == YamlNode.Scalar.Kind.BOOLEAN) {
+            return Boolean.parseBoolean(s.text());
+        }
+        error(node, path, "expected true or false, got " + node.describe());
+        return null;
+    }
+
+    /** A bare number, for factors and ratios. */
+    Double number(YamlNode node, String path) {
+        if (node instanceof YamlNode.Scalar s
+                && (s.kind() == YamlNode.Scalar.Kind.INTEGER || s.kind() == YamlNode.Scalar.Kind.FLOAT)) {
+            try {
+                double value = Double.parseDouble(s.text());
+                if (Double.isFinite(value)) {
+                    return value;
+                }
+            } catch (NumberFormatException ignored) {
+                // falls through to the message
+            }
+            error(node, path, "expected a finite number, got " + s.text());
+            return null;
+        }
+        error(node, path, "expected a number, got " + node.describe());
+        return null;
+    }
+
+    /** A quantity with its unit, in SI. */
+    Double quantity(YamlNode node, String path, Dimension dimension) {
+        if (!(node instanceof YamlNode.Scalar s) || s.kind() == YamlNode.Scalar.Kind.NULL) {
+            error(node, path, "expected a " + dimension.description() + " with its unit, e.g. \"12 "
+                    + org.beamfolio.units.Units.symbolsOf(dimension).get(0) + "\", got " + node.describe());
+            return null;
+        }
+        if (s.kind() == YamlNode.Scalar.Kind.INTEGER || s.kind() == YamlNode.Scalar.Kind.FLOAT) {
+            error(node, path, "a bare number is not a " + dimension.description() + ": add its unit, e.g. \""
+                    + s.text() + " " + org.beamfolio.units.Units.symbolsOf(dimension).get(0) + "\"");
+            return null;
+        }
+        QuantityParser.Result result = QuantityParser.parse(s.text(), dimension);
+        if (!result.ok()) {
+            error(node, path, result.error());
+            return null;
+        }
+        return result.si();
+    }
+
+    /** A quantity that must be greater than zero. */
+    Double positive(YamlNode node, String path, Dimension dimension) {
+        Double value = quantity(node, path, dimension);
+        if (value != null && !(value > 0)) {
+            error(node, path, "must be greater than zero, got " + text(node, path));
+            return null;
+        }
+        return value;
+    }
+
+    /** One of a closed set of words, with a suggestion when it is near one. */
+    String choice(YamlNode node, String path, List<String> allowed) {
+        String text = text(node, path);
+        if (text == null) {
+            return null;
+        }
+        for (String option : allowed) {
+            if (option.equalsIgnoreCase(text.strip())) {
+                return option;
+            }
+        }
+        String hint = Suggest.closest(text, allowed).map(s -> "; did you mean \"" + s + "\"?").orElse("");
+        error(node, path, "unknown value \"" + text + "\"" + hint + " (one of: " + String.join(", ", allowed) + ")");
+        return null;
+    }
+
+    /** The keys of one mapping, with required and optional look-ups and a check for unknown keys. */
+    static final class Fields {
+        private final ReadContext context;
+        private final YamlNode.Mapping mapping;
+        private final String path;
+        private final Set<String> known = new LinkedHashSet<>();
+
+        private Fields(ReadContext context, YamlNode.Mapping mapping, String path) {
+            this.context = context;
+            this.mapping = mapping;
+            this.path = path;
+        }
+
+        YamlNode.Mapping node() {
+            return mapping;
+        }
+
+        String path(String key) {
+            return path.isEmpty() ? key : path + "." + key;
+        }
+
+        String path() {
+            return path;
+        }
+
+        YamlNode optional(String key) {
+            known.add(key);
+            YamlNode.Entry entry = mapping.entries().get(key);
+            if (entry == null || (entry.value() instanceof YamlNode.Scalar s && s.kind() == YamlNode.Scalar.Kind.NULL)) {
+                return null;
+            }
+            return entry.value();
+        }
+
+        YamlNode required(String key) {
+            YamlNode value = optional(key);
+            if (value == null) {
+                context.error(mapping, path(key), "missing: this " + (path.isEmpty() ? "file" : "entry")
+                        + " needs a \"" + key + "\"");
+            }
+            return value;
+        }
+
+        boolean has(String key) {
+            return optional(key) != null;
+        }
+
+        /** Reports every key not asked for, with the nearest known key as a suggestion. */
+        void rejectUnknown(String... alsoAllowed) {
+            known.addAll(List.of(alsoAllowed));
+            for (YamlNode.Entry entry : mapping.entries().values()) {
+                if (!known.contains(entry.key())) {
+                    String hint = Suggest.closest(entry.key(), known).map(s -> "; did you mean \"" + s + "\"?").orElse("");
+                    context.error(entry.keyLocation(), path(entry.key()), "unknown key" + hint
+                            + " (allowed here: " + String.join(", ", known) + ")");
+                }
+            }
+        }
+    }
+}

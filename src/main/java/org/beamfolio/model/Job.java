@@ -1,0 +1,26 @@
+package org.beamfolio.model;
+
+import java.util.List;
+import java.util.Map;
+
+/**
+ * A validated job: everything format 1 says, in SI units, ready for analysis.
+ *
+ * @param combinationSet the built-in set's name, or null for an explicit list
+ * @param combinations the combinations the job states (a built-in set is expanded by the analysis)
+ */
+public record Job(String name, String sourceText, String sha256, Project project, ReportSettings report,
+                  Map<String, Material> materials, Map<String, Section> sections, Beam beam,
+                  List<Load> loads, Map<String, String> cases, String combinationSet,
+                  List<Combination> combinations, List<String> pattern, boolean stressCheck,
+                  List<DeflectionLimit> deflectionLimits) {
+    public Job {
+        materials = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(materials));
+        sections = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(sections));
+        loads = List.copyOf(loads);
+        cases = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(cases));
+        combinations = List.copyOf(combinations);
+        pattern = List.copyOf(pattern);
+        deflectionLimits = List.copyOf(deflectionLimits);
+    }
+}

@@ -1,0 +1,23 @@
+package org.beamfolio.results;
+
+import org.beamfolio.model.ReportSettings;
+import org.beamfolio.units.Unit;
+import org.beamfolio.units.Units;
+
+/**
+ * The units a package reports in: US reports ft, lb, lb*ft, lb/ft, psi and in (deflection, and
+ * in, in^2, in^3, in^4 for sections); SI reports m, kN, kN*m, kN/m, MPa and mm (mm for sections).
+ */
+public record ReportUnits(Unit length, Unit force, Unit moment, Unit distributed, Unit stress, Unit deflection,
+                          Unit sectionLength, Unit area, Unit firstMoment, Unit secondMoment, Unit rotationalStiffness,
+                          Unit stiffness) {
+    public static ReportUnits of(ReportSettings.UnitSystem system) {
+        return system == ReportSettings.UnitSystem.SI
+                ? new ReportUnits(Units.of("m"), Units.of("kN"), Units.of("kN*m"), Units.of("kN/m"), Units.of("MPa"),
+                        Units.of("mm"), Units.of("mm"), Units.of("mm^2"), Units.of("mm^3"), Units.of("mm^4"),
+                        Units.of("kN*m/rad"), Units.of("kN/mm"))
+                : new ReportUnits(Units.of("ft"), Units.of("lb"), Units.of("lb*ft"), Units.of("lb/ft"), Units.of("psi"),
+                        Units.of("in"), Units.of("in"), Units.of("in^2"), Units.of("in^3"), Units.of("in^4"),
+                        Units.of("kip*ft/rad"), Units.of("kip/in"));
+    }
+}
