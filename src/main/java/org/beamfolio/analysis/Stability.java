@@ -2,7 +2,6 @@ package org.beamfolio.analysis;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import java.util.Optional;
 import org.apache.commons.math3.linear.Array2DRowRealMatrix;
 import org.apache.commons.math3.linear.RealMatrix;
@@ -11,7 +10,7 @@ import org.beamfolio.model.Beam;
 import org.beamfolio.model.Hinge;
 import org.beamfolio.model.Support;
 import org.beamfolio.model.SupportKind;
-import org.beamfolio.units.Units;
+import org.beamfolio.units.Lengths;
 
 /**
  * Kinematic check before any stiffness is assembled. As rigid parts joined at the hinges, the beam
@@ -132,6 +131,6 @@ public final class Stability {
     }
 
     private static String ft(double metres) {
-        return String.format(Locale.ROOT, "%.4g ft (%.4g m)", metres / Units.FOOT, metres);
+        return Lengths.describe(metres);
     }
 }

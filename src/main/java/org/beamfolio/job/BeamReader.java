@@ -12,6 +12,7 @@ import org.beamfolio.model.Segment;
 import org.beamfolio.model.Support;
 import org.beamfolio.model.SupportKind;
 import org.beamfolio.units.Dimension;
+import org.beamfolio.units.Lengths;
 import org.beamfolio.units.Suggest;
 
 /** Reads the beam: its length, section and material, supports, hinges and segments. */
@@ -86,7 +87,7 @@ final class BeamReader {
             return x;
         }
         if (x < -SAME_POINT * length || x > length * (1 + SAME_POINT)) {
-            c.error(n, path, "is off the beam: positions run from 0 to the beam length " + Format.length(length));
+            c.error(n, path, "is off the beam: positions run from 0 to the beam length " + Lengths.describe(length));
             return null;
         }
         return Math.max(0, Math.min(length, x));
@@ -111,6 +112,7 @@ final class BeamReader {
         }
         List<Support> result = new ArrayList<>();
         boolean ok = true;
+        double same = samePoint(length);
         for (int i = 0; i < items.size(); i++) {
             String path = f.path("supports") + "[" + i + "]";
             ReadContext.Fields s = c.fields(items.get(i), path);
@@ -137,8 +139,8 @@ final class BeamReader {
                 continue;
             }
             for (Support earlier : result) {
-                if (Math.abs(earlier.at() - at) <= SAME_POINT * length) {
-                    c.error(atNode, s.path("at"), "two supports at " + Format.length(at) + " (the other is at line "
+                if (Math.abs(earlier.at() - at) <= same) {
+                    c.error(atNode, s.path("at"), "two supports at " + Lengths.describe(at) + " (the other is at line "
                             + earlier.where().line() + "): combine them into one");
                     ok = false;
                 }
@@ -167,6 +169,9 @@ final class BeamReader {
         }
         List<Hinge> result = new ArrayList<>();
         boolean ok = true;
+        if (length == null) {
+            return null;
+        }
         for (int i = 0; i < items.size(); i++) {
             String path = f.path("hinges") + "[" + i + "]";
             YamlNode item = items.get(i);
@@ -186,14 +191,14 @@ final class BeamReader {
                             || (s.kind() instanceof SupportKind.Spring sp && sp.kr() > 0);
                     if (restrainsRotation && Math.abs(s.at() - at) <= SAME_POINT * length) {
                         c.error(item, path, "a hinge cannot stand at a support that restrains rotation ("
-                                + s.kind().label() + " at " + Format.length(s.at()) + "): say which side the support holds by moving one of them");
+                                + s.kind().label() + " at " + Lengths.describe(s.at()) + "): say which side the support holds by moving one of them");
                         ok = false;
                     }
                 }
             }
             for (Hinge earlier : result) {
                 if (Math.abs(earlier.at() - at) <= SAME_POINT * length) {
-                    c.error(item, path, "two hinges at " + Format.length(at));
+                    c.error(item, path, "two hinges at " + Lengths.describe(at));
                     ok = false;
                 }
             }
@@ -214,6 +219,7 @@ final class BeamReader {
         }
         List<Segment> result = new ArrayList<>();
         boolean ok = true;
+        double same = samePoint(length);
         for (int i = 0; i < items.size(); i++) {
             String path = f.path("segments") + "[" + i + "]";
             ReadContext.Fields s = c.fields(items.get(i), path);
@@ -244,9 +250,9 @@ final class BeamReader {
                 continue;
             }
             for (Segment earlier : result) {
-                if (from < earlier.to() - SAME_POINT * length && to > earlier.from() + SAME_POINT * length) {
-                    c.error(items.get(i), path, "overlaps an earlier segment (" + Format.length(earlier.from()) + " to "
-                            + Format.length(earlier.to()) + ")");
+                if (from < earlier.to() - same && to > earlier.from() + same) {
+                    c.error(items.get(i), path, "overlaps an earlier segment (" + Lengths.describe(earlier.from()) + " to "
+                            + Lengths.describe(earlier.to()) + ")");
                     ok = false;
                 }
             }
@@ -257,6 +263,11 @@ final class BeamReader {
         }
         result.sort(Comparator.comparingDouble(Segment::from));
         return result;
+    }
+
+    /** Positions this close are the same point; without a valid length, a nanometre. */
+    static double samePoint(Double length) {
+        return length == null ? 1e-9 : SAME_POINT * length;
     }
 
     private static String defaultId(ReadContext.Fields beam, String key) {

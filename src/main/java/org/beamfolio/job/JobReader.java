@@ -63,7 +63,9 @@ public final class JobReader {
                     .onUnmappableCharacter(CodingErrorAction.REPORT)
                     .decode(ByteBuffer.wrap(bytes)).toString();
         } catch (CharacterCodingException e) {
-            return new JobReading(label, null, null, List.of(new Diagnostic(label, firstBadByte(bytes), "",
+            // shown with the bad bytes replaced, so the offending line can still be printed
+            String lossy = new String(bytes, StandardCharsets.UTF_8);
+            return new JobReading(label, lossy, null, List.of(new Diagnostic(label, firstBadByte(bytes), "",
                     "the file is not UTF-8 text (save it as UTF-8)")));
         }
         if (text.startsWith("\uFEFF")) {

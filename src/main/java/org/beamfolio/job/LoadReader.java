@@ -120,7 +120,7 @@ final class LoadReader {
         if (from == null || to == null) {
             return null;
         }
-        if (!(to - from > BeamReader.SAME_POINT * (length == null ? 1 : length))) {
+        if (!(to - from > BeamReader.samePoint(length))) {
             YamlNode at = toNode != null ? toNode : f.node();
             c.error(at, f.path("to"), "the range is reversed or empty: \"to\" must be greater than \"from\"");
             return null;

@@ -73,6 +73,12 @@ final class YamlTreeReader {
     private YamlNode readValue(YAMLParser p, List<Diagnostic> duplicates, String file, String path) throws IOException {
         JsonToken token = p.currentToken();
         Location at = locationOf(p.currentTokenLocation());
+        if (p.isCurrentAlias()) {
+            // refused rather than expanded: a job file is read by people, and expansion is how alias bombs work
+            duplicates.add(new Diagnostic(file, at, path, "YAML aliases (*" + p.getText()
+                    + ") are not accepted in job files: write the value out in full"));
+            return new YamlNode.Scalar(at, "", YamlNode.Scalar.Kind.NULL);
+        }
         switch (token) {
             case START_OBJECT: {
                 Map<String, YamlNode.Entry> entries = new LinkedHashMap<>();

@@ -1,0 +1,63 @@
+package org.beamfolio;
+
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.charset.StandardCharsets;
+import org.beamfolio.analysis.Analysis;
+import org.beamfolio.analysis.AnalysisResult;
+import org.beamfolio.analysis.Response;
+import org.beamfolio.analysis.UnstableBeamException;
+import org.beamfolio.job.JobReader;
+import org.beamfolio.job.JobReading;
+import org.beamfolio.model.Job;
+
+/**
+ * Test beams written as job files. The common part fixes EI = 200 GPa x 1e8 mm^4 = 2e7 N*m^2
+ * (invented test data, chosen for round numbers), so closed forms can be evaluated by hand.
+ */
+public final class TestJobs {
+    public static final double EI = 200e9 * 1e8 * 1e-12;
+
+    private TestJobs() {}
+
+    public static String header() {
+        return """
+                beamfolio: 1
+                project: { title: Test beam, number: T-1 }
+                report: { units: SI, paper: a4 }
+                materials:
+                  m: { E: 200 GPa, density: 7850 kg/m^3, allowable: { tension: 165 MPa, compression: 165 MPa, shear: 100 MPa } }
+                sections:
+                  s: { shape: given, I: 1e8 mm^4, depth: 300 mm, y_bottom: 150 mm, A: 5000 mm^2, Q: 4e5 mm^3, t: 8 mm }
+                """;
+    }
+
+    /** A job of the common header, this beam block (indented under beam:) and these loads. */
+    public static String text(String length, String supports, String loads) {
+        return header() + "beam:\n  length: " + length + "\n  section: s\n  material: m\n  supports:\n" + supports
+                + "loads:\n" + loads;
+    }
+
+    public static JobReading read(String text) {
+        return JobReader.read("test.yaml", "test", text.getBytes(StandardCharsets.UTF_8));
+    }
+
+    public static Job job(String text) {
+        JobReading reading = read(text);
+        assertTrue(reading.ok(), () -> "test job should be valid:\n" + reading.report() + "\n" + text);
+        return reading.job();
+    }
+
+    public static AnalysisResult solve(String text) {
+        try {
+            return Analysis.run(job(text));
+        } catch (UnstableBeamException e) {
+            throw new AssertionError("test beam should be stable: " + e.getMessage(), e);
+        }
+    }
+
+    /** The response to load case D of a job. */
+    public static Response caseD(String text) {
+        return solve(text).cases().get("D");
+    }
+}
