@@ -26,6 +26,10 @@ final class Spans {
         if (beam.length() - at.get(at.size() - 1) > tolerance) {
             spans.add(new AnalysisResult.Span("right overhang", at.get(at.size() - 1), beam.length()));
         }
+        if (at.size() == 1) {
+            // a single support: the whole beam cantilevers from it (to one side or both)
+            spans.replaceAll(s -> new AnalysisResult.Span(s.label().replace("overhang", "cantilever"), s.from(), s.to()));
+        }
         return spans;
     }
 

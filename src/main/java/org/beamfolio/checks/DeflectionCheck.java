@@ -32,13 +32,13 @@ final class DeflectionCheck implements Check {
             Field deflection = r.deflection();
             if (limit.spanRatio() != null) {
                 for (AnalysisResult.Span span : result.spans()) {
-                    boolean overhang = !span.label().startsWith("span ");
+                    boolean overhang = !span.label().startsWith("span "); // an overhang or a cantilever
                     double effective = (overhang ? 2 : 1) * (span.to() - span.from());
                     double allowed = effective / limit.spanRatio();
                     Extreme worst = largestIn(deflection, span.from(), span.to());
                     double demand = Math.abs(worst.value());
-                    String label = span.label().replace(" ", "");
-                    out.add(new CheckOutcome("deflection-" + String.join("", limit.cases()) + "-" + label,
+                    String label = span.label().replace("span ", "span").replace(" ", "-");
+                    out.add(new CheckOutcome("deflection-" + String.join("+", limit.cases()) + "-" + label,
                             "Deflection under " + name + " in " + span.label() + ", limit " + (overhang ? "2L" : "L") + "/"
                                     + trim(limit.spanRatio()),
                             u.deflection().fromSi(demand), u.deflection().fromSi(allowed), demand / allowed,
@@ -47,7 +47,7 @@ final class DeflectionCheck implements Check {
             } else {
                 Extreme worst = deflection.maxAbs();
                 double demand = Math.abs(worst.value());
-                out.add(new CheckOutcome("deflection-" + String.join("", limit.cases()) + "-max",
+                out.add(new CheckOutcome("deflection-" + String.join("+", limit.cases()) + "-max",
                         "Largest deflection under " + name + " against a maximum of " + trim(u.deflection().fromSi(limit.maximum()))
                                 + " " + u.deflection().symbol(),
                         u.deflection().fromSi(demand), u.deflection().fromSi(limit.maximum()), demand / limit.maximum(),

@@ -82,7 +82,7 @@ public final class BuiltInSets {
         for (String lead : variables) {
             List<CombinationTemplate.Term> terms = new ArrayList<>();
             terms.add(term(1.35, "D"));
-            terms.add(term(1.5, lead));
+            terms.add(CombinationTemplate.leading(1.5, lead));
             for (String other : variables) {
                 double factor = 1.5 * psi0.get(other);
                 if (!other.equals(lead) && factor > 0) {
@@ -95,7 +95,7 @@ public final class BuiltInSets {
         for (String lead : variables) {
             List<CombinationTemplate.Term> terms = new ArrayList<>();
             terms.add(term(1, "D"));
-            terms.add(term(1, lead));
+            terms.add(CombinationTemplate.leading(1, lead));
             for (String other : variables) {
                 if (!other.equals(lead) && psi0.get(other) > 0) {
                     terms.add(term(psi0.get(other), other));

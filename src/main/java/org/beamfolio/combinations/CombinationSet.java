@@ -42,6 +42,10 @@ public record CombinationSet(String id, String source, Purpose purpose, List<Com
                 List<CombinationTemplate.Choice> usable = term.choices().stream()
                         .filter(c -> c.loadCase().equals("D") || usedCases.contains(c.loadCase()))
                         .toList();
+                if (usable.isEmpty() && term.required()) {
+                    variants.clear();
+                    break;
+                }
                 if (usable.isEmpty()) {
                     missing = true;
                     continue;
@@ -55,6 +59,9 @@ public record CombinationSet(String id, String source, Purpose purpose, List<Com
                     }
                 }
                 variants = next;
+            }
+            if (variants.isEmpty()) {
+                dropped.add(template.reference() + ": the job has no load of its leading case");
             }
             for (List<CombinationTemplate.Choice> variant : variants) {
                 Map<String, Double> factors = new LinkedHashMap<>();

@@ -16,15 +16,26 @@ public record CombinationTemplate(String reference, List<Term> terms) {
     /** One of the alternatives a term offers: a factor on one case. */
     public record Choice(double factor, String loadCase, String label) {}
 
-    /** A sum term; one of its choices applies, or none when the job has none of their cases. */
-    public record Term(List<Choice> choices) {
+    /**
+     * A sum term; one of its choices applies, or none when the job has none of their cases. A
+     * required term (the leading variable action of EN 1990) takes the whole combination with it.
+     */
+    public record Term(List<Choice> choices, boolean required) {
         public Term {
             choices = List.copyOf(choices);
+        }
+
+        public Term(List<Choice> choices) {
+            this(choices, false);
         }
     }
 
     static Term term(double factor, String loadCase) {
         return new Term(List.of(choice(factor, loadCase)));
+    }
+
+    static Term leading(double factor, String loadCase) {
+        return new Term(List.of(choice(factor, loadCase)), true);
     }
 
     static Term anyOf(Choice... choices) {
