@@ -5,7 +5,9 @@ import org.beamfolio.section.SectionProperties;
 /**
  * Stresses from a response, element by element with each element's section: fibre stress
  * sigma = M y / I (top: y = -c_top, bottom: y = +c_bottom, tension positive, sagging M positive)
- * and shear stress at the neutral axis tau = V Q / (I t). Being linear in M and V, their extremes
+ * and shear stress tau = V Q / (I t), the larger of its values at the neutral axis and at each
+ * flange-to-web junction (where a narrow web under a wide flange can govern, as in a tee whose
+ * neutral axis lies in the flange). Being linear in M and V, their extremes
  * are those of scaled polynomial pieces and as exact.
  */
 public final class Stresses {
@@ -26,7 +28,7 @@ public final class Stresses {
             if (s.qNeutral() == null || s.tNeutral() == null) {
                 shearKnown = false;
             } else {
-                q[e] = s.qNeutral() / (s.inertia() * s.tNeutral());
+                q[e] = s.shearStressFactor();
             }
         }
         shear = shearKnown ? q : null;

@@ -39,6 +39,7 @@ final class FibreStressCheck implements Check {
         double bestLimit = 0;
         double bestAt = 0;
         String bestCombination = "";
+        String bestFibre = "";
         for (CombinationResult c : StressCombinations.of(result)) {
             Field top = stresses.top(c.response());
             Field bottom = stresses.bottom(c.response());
@@ -47,6 +48,7 @@ final class FibreStressCheck implements Check {
                 double allowable = kind == Kind.TENSION ? m.allowableTension() : m.allowableCompression();
                 for (Field f : List.of(top, bottom)) {
                     Extreme x = f.extremeOf(e, sign);
+                    String fibre = f == top ? "top" : "bottom";
                     double demand = Math.max(0, sign * x.value());
                     double ratio = demand / allowable;
                     if (ratio > bestRatio) {
@@ -55,6 +57,9 @@ final class FibreStressCheck implements Check {
                         bestLimit = allowable;
                         bestAt = x.at();
                         bestCombination = c.name();
+                        // tension at the top or compression at the bottom comes from hogging
+                        boolean hogging = (f == top) == (kind == Kind.TENSION);
+                        bestFibre = fibre + " fibre, " + (hogging ? "hogging" : "sagging") + " moment";
                     }
                 }
             }
@@ -64,7 +69,7 @@ final class FibreStressCheck implements Check {
         }
         String what = kind == Kind.TENSION ? "tension" : "compression";
         List<CheckOutcome> out = new ArrayList<>();
-        out.add(new CheckOutcome("stress-" + what, "Extreme fibre bending stress in " + what + ", f = M c / I, against the allowable",
+        out.add(new CheckOutcome("stress-" + what, "Extreme fibre bending stress in " + what + ", f = M c / I (" + bestFibre + "), against the allowable",
                 u.stress().fromSi(bestDemand), u.stress().fromSi(bestLimit), bestRatio, bestRatio <= 1, bestCombination,
                 bestAt, u.stress().symbol()));
         return out;

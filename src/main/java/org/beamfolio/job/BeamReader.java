@@ -8,6 +8,7 @@ import org.beamfolio.model.Beam;
 import org.beamfolio.model.Hinge;
 import org.beamfolio.model.Material;
 import org.beamfolio.model.Section;
+import org.beamfolio.model.SectionShape;
 import org.beamfolio.model.Segment;
 import org.beamfolio.model.Support;
 import org.beamfolio.model.SupportKind;
@@ -46,12 +47,25 @@ final class BeamReader {
                     c.error(sw, f.path("self_weight"), "self weight needs a density: material \"" + m + "\" has none");
                 }
             }
+            for (String id : usedSections(section, segments)) {
+                if (sections.get(id) != null && sections.get(id).shape() instanceof SectionShape.Given g && g.A() == null) {
+                    c.error(sw, f.path("self_weight"), "self weight needs the area: section \"" + id + "\" gives no A");
+                }
+            }
         }
         f.rejectUnknown();
         if (length == null || section == null || material == null || supports == null || hinges == null || segments == null) {
             return null;
         }
         return new Beam(length, section, material, supports, hinges, segments, selfWeight);
+    }
+
+    private static List<String> usedSections(String section, List<Segment> segments) {
+        List<String> result = new ArrayList<>(List.of(section));
+        if (segments != null) {
+            segments.forEach(s -> result.add(s.section()));
+        }
+        return result;
     }
 
     private static List<String> usedMaterials(String material, List<Segment> segments) {

@@ -37,6 +37,27 @@ public record SectionProperties(Double area, double yBottom, double inertia, dou
         return inertia / cBottom();
     }
 
+    /**
+     * The largest Q / (I t) over the neutral axis and the junctions: shear stress per unit shear
+     * force. Null without Q or t.
+     */
+    public Double shearStressFactor() {
+        if (qNeutral == null || tNeutral == null) {
+            return null;
+        }
+        double factor = qNeutral / (inertia * tNeutral);
+        for (Junction j : junctions) {
+            factor = Math.max(factor, Math.abs(j.q()) / (inertia * j.width()));
+        }
+        return factor;
+    }
+
+    /** Where the largest shear stress acts: "neutral axis" or the junction's height. */
+    public boolean shearGovernsAtJunction() {
+        Double factor = shearStressFactor();
+        return factor != null && factor > qNeutral / (inertia * tNeutral);
+    }
+
     /** A horizontal cut where the width changes: its height above the bottom, Q above it and the width. */
     public record Junction(double height, double q, double width) {}
 

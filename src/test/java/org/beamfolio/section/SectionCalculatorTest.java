@@ -103,6 +103,36 @@ class SectionCalculatorTest {
     }
 
     @Test
+    void dressedLumberAgainstTheNdsSupplement() {
+        // NDS Supplement (2018), Table 1B, section properties of dressed sawn lumber (values from
+        // memory): 2x10 (1.5 x 9.25 in) A = 13.88 in^2, Sx = 21.39 in^3, Ix = 98.93 in^4;
+        // 4x12 (3.5 x 11.25 in) A = 39.38 in^2, Sx = 73.83 in^3, Ix = 415.3 in^4. The table rounds.
+        double in = Units.INCH;
+        SectionProperties joist = of(new SectionShape.Rectangle(1.5 * in, 9.25 * in), false);
+        assertEquals(13.88, joist.area() / (in * in), 0.0051);
+        assertEquals(21.39, joist.sBottom() / Math.pow(in, 3), 0.0051);
+        assertEquals(98.93, joist.inertia() / Math.pow(in, 4), 0.0051);
+        SectionProperties beam = of(new SectionShape.Rectangle(3.5 * in, 11.25 * in), false);
+        assertEquals(39.38, beam.area() / (in * in), 0.0051);
+        assertEquals(73.83, beam.sTop() / Math.pow(in, 3), 0.0051);
+        assertEquals(415.3, beam.inertia() / Math.pow(in, 4), 0.05);
+    }
+
+    @Test
+    void shearStressCanGovernAtTheJunctionOfAThinStem() {
+        // Flange 300 x 60 mm on a 6 x 60 mm stem: the neutral axis lies in the flange, where the
+        // width is 300 mm, so V Q / (I t) is larger at the flange-stem junction (width 6 mm).
+        // By hand: A = 18000 + 360 = 18360 mm^2, y = (360 * 30 + 18000 * 90) / 18360 = 88.82 mm;
+        // Q at the junction (y = 60 mm, area above it is the flange) = 18000 * (90 - y).
+        SectionProperties p = of(new SectionShape.Tee(120 * MM, 300 * MM, 60 * MM, 6 * MM), false);
+        double y = (360 * 30.0 + 18000 * 90.0) / 18360;
+        near(y * MM, p.yBottom());
+        double qJunction = 18000 * (90 - y) * Math.pow(MM, 3);
+        assertEquals(true, p.shearGovernsAtJunction());
+        near(qJunction / (p.inertia() * 6 * MM), p.shearStressFactor());
+    }
+
+    @Test
     void platesMatchTheSameShapeBuiltIn() {
         // an I built of three plates is the I shape (same rectangles)
         SectionProperties plates = of(new SectionShape.Plates(List.of(
