@@ -69,7 +69,7 @@ public final class Analysis {
             results.addAll(patterns(job, model, loads, spans, combinations, references, cases, stresses));
         }
         Extremes envelope = Envelope.of(results);
-        return new AnalysisResult(job, model, sections, cases, results, envelope, dropped, source, spans);
+        return new AnalysisResult(job, model, List.copyOf(loads), sections, cases, results, envelope, dropped, source, spans);
     }
 
     private static Response solve(StructureModel model, List<Load> loads, String name, Job job) throws UnstableBeamException {

@@ -12,8 +12,9 @@ import org.beamfolio.section.SectionProperties;
  * @param combinations every combination, then every pattern arrangement
  * @param droppedCombinations built-in combinations left out, and why
  * @param combinationSource the standard the combinations come from, or "job file"
+ * @param loads every load analysed: the job's, then the self weight
  */
-public record AnalysisResult(Job job, StructureModel model, Map<String, SectionProperties> sections,
+public record AnalysisResult(Job job, StructureModel model, List<org.beamfolio.model.Load> loads, Map<String, SectionProperties> sections,
                              Map<String, Response> cases, List<CombinationResult> combinations,
                              Extremes envelope, List<String> droppedCombinations, String combinationSource,
                              List<Span> spans) {

@@ -82,6 +82,13 @@ public final class StructureModel {
         return ei[element];
     }
 
+    /** The element that holds x (the one to the right at a node). */
+    public int elementAt(double at) {
+        int node = nodeAt(x, at);
+        int e = x[node] <= at ? node : node - 1;
+        return Math.max(0, Math.min(elements() - 1, e));
+    }
+
     public List<Support> supports() {
         return supports;
     }

@@ -78,7 +78,7 @@ public final class JobReader {
         } catch (YamlTreeReader.SyntaxError e) {
             return new JobReading(label, text, null, List.of(new Diagnostic(label, e.location, "", e.getMessage())));
         }
-        Job job = new JobReader.Walk(context, name, text, sha256(bytes)).job(root);
+        Job job = new JobReader.Walk(context, name, text, bytes).job(root);
         return new JobReading(label, text, context.diagnostics().isEmpty() ? job : null, context.diagnostics());
     }
 
@@ -122,13 +122,13 @@ public final class JobReader {
         private final ReadContext context;
         private final String name;
         private final String text;
-        private final String digest;
+        private final byte[] bytes;
 
-        Walk(ReadContext context, String name, String text, String digest) {
+        Walk(ReadContext context, String name, String text, byte[] bytes) {
             this.context = context;
             this.name = name;
             this.text = text;
-            this.digest = digest;
+            this.bytes = bytes;
         }
 
         Job job(YamlNode root) {
@@ -155,8 +155,8 @@ public final class JobReader {
             if (!context.diagnostics().isEmpty() || project == null || beam == null || combos == null) {
                 return null;
             }
-            return new Job(name, text, digest, project, report, materials, sections, beam, loads, cases,
-                    combos.setName(), combos.combinations(), combos.pattern(), combos.stressCheck(), combos.deflection());
+            return new Job(name, text, sha256(bytes), project, report, materials, sections, beam, loads, cases,
+                    combos.setName(), combos.combinations(), combos.pattern(), combos.stressCheck(), combos.deflection(), bytes);
         }
 
         /** A stress check compares with the allowables, so every material on the beam must give them. */

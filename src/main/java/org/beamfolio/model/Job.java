@@ -8,13 +8,15 @@ import java.util.Map;
  *
  * @param combinationSet the built-in set's name, or null for an explicit list
  * @param combinations the combinations the job states (a built-in set is expanded by the analysis)
+ * @param sourceBytes the job file exactly as read, for the package's attachment
  */
 public record Job(String name, String sourceText, String sha256, Project project, ReportSettings report,
                   Map<String, Material> materials, Map<String, Section> sections, Beam beam,
                   List<Load> loads, Map<String, String> cases, String combinationSet,
                   List<Combination> combinations, List<String> pattern, boolean stressCheck,
-                  List<DeflectionLimit> deflectionLimits) {
+                  List<DeflectionLimit> deflectionLimits, byte[] sourceBytes) {
     public Job {
+        sourceBytes = sourceBytes.clone();
         materials = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(materials));
         sections = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(sections));
         loads = List.copyOf(loads);
@@ -22,5 +24,10 @@ public record Job(String name, String sourceText, String sha256, Project project
         combinations = List.copyOf(combinations);
         pattern = List.copyOf(pattern);
         deflectionLimits = List.copyOf(deflectionLimits);
+    }
+
+    @Override
+    public byte[] sourceBytes() {
+        return sourceBytes.clone();
     }
 }

@@ -21,6 +21,10 @@ public final class Numbers {
         if (value == 0 || Math.abs(value) < 1e-300) {
             return "0";
         }
+        if (Math.abs(value) < 1e-4) {
+            // a residual or other tiny value: scientific notation rather than a row of zeros
+            return String.format(Locale.US, "%.3e", value);
+        }
         if (Math.abs(value) >= 999.95) {
             DecimalFormat grouped = new DecimalFormat("#,##0", DecimalFormatSymbols.getInstance(Locale.US));
             grouped.setRoundingMode(RoundingMode.HALF_EVEN);

@@ -4,20 +4,45 @@ import java.util.List;
 
 /**
  * What the package prints, as text ready for the page: every number already rounded for display
- * (by {@link Numbers}) and labelled with its unit. Built from the analysis and checks by
- * {@link ReportModelBuilder}; read by the templates in report-templates/.
+ * (by {@link Numbers}) and labelled with its unit; figures by the id of their drawing. Built by
+ * {@link ReportModelBuilder}; read by the templates in report-templates/ as {@code r}.
  */
-public record ReportModel(Project project, String paper, String toolVersion, String digest, String jobFile,
-                          List<Row> beam, List<List<String>> supports, List<List<String>> loads,
-                          List<String> sectionHeader, List<List<String>> sections,
-                          String combinationSource, List<String> droppedCombinations,
-                          List<String> reactionHeader, List<List<String>> reactions,
-                          List<List<String>> envelope, List<List<String>> checks, String governing,
-                          List<String> method, List<String> cautions) {
+public record ReportModel(Sheet sheet, Cover cover, Basis basis, Loading loading, List<CombinationSheet> analyses,
+                          Envelope envelope, Stresses stresses, Checks checks, List<String> cautions,
+                          List<String> reviewChecklist, List<List<String>> history, Appendix appendix) {
 
-    public record Project(String title, String number, String client, String location, String subject,
-                          String preparedBy, String checkedBy, String date, String revision, String notes) {}
+    /** The title block on every sheet. */
+    public record Sheet(String title, String number, String subject, String revision, String preparedBy, String date,
+                        String checkedBy, String client, String location, String paper, String toolVersion, String jobFile) {}
 
-    /** A label and its value. */
+    public record Cover(String scope, List<Row> contents) {}
+
+    /** A label and its value (or a contents entry: title and anchor). */
     public record Row(String label, String value) {}
+
+    public record Table(List<String> header, List<List<String>> rows) {}
+
+    public record Figure(String id, String caption, String height) {}
+
+    /** One step of working: what it is, the formula, the numbers put in, the result, the source. */
+    public record Equation(String statement, String symbolic, String substituted, String result, String source) {}
+
+    public record Basis(List<String> codes, List<Row> units, List<String> conventions, String conventionSketch,
+                        List<String> method, List<String> limitations, String notes, Table materials, Table sections) {}
+
+    public record Loading(List<Row> beam, Table supports, List<Figure> diagrams, Table loads, String combinationSource,
+                          Table combinations, List<String> dropped, List<String> patternNote) {}
+
+    public record CombinationSheet(String anchor, String name, String governs, Table reactions, List<Equation> equilibrium,
+                                   List<Figure> figures, Table keyPoints) {}
+
+    public record Envelope(Table extremes, List<Figure> figures, int arrangements) {}
+
+    public record SectionSheet(String id, List<Row> properties, Table parts) {}
+
+    public record Stresses(List<SectionSheet> sections, List<Equation> equations) {}
+
+    public record Checks(Table table, String governing, boolean allPass, boolean any) {}
+
+    public record Appendix(List<Row> lines, String digest, String toolVersion, String attachment) {}
 }

@@ -1,204 +1,216 @@
 package org.beamfolio.report;
 
 import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.LinkedHashSet;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
+import java.util.Set;
 import org.beamfolio.analysis.AnalysisResult;
 import org.beamfolio.analysis.CombinationResult;
-import org.beamfolio.analysis.Extreme;
 import org.beamfolio.analysis.Extremes;
-import org.beamfolio.model.Hinge;
+import org.beamfolio.model.DeflectionLimit;
 import org.beamfolio.model.Job;
-import org.beamfolio.model.Load;
 import org.beamfolio.model.Material;
-import org.beamfolio.model.Section;
-import org.beamfolio.model.Support;
-import org.beamfolio.model.SupportKind;
+import org.beamfolio.model.Project;
+import org.beamfolio.report.drawing.Drawing;
+import org.beamfolio.report.drawing.SignConventionSketch;
 import org.beamfolio.results.CheckOutcome;
 import org.beamfolio.results.ReportUnits;
 import org.beamfolio.results.Version;
-import org.beamfolio.section.SectionProperties;
-import org.beamfolio.units.Unit;
 
-/** Gathers a solved job into the {@link ReportModel}, converting to the report's units once. */
+/**
+ * Gathers a solved job into the {@link ReportModel} and the drawings it refers to, converting to
+ * the report's units once. Each part of the package has its own builder.
+ */
 final class ReportModelBuilder {
+    /** The model and its drawings by id. */
+    record Built(ReportModel model, Map<String, Drawing> drawings) {}
+
     private final AnalysisResult result;
-    private final ReportUnits u;
+    private final Texts t;
+    private final Map<String, Drawing> drawings = new LinkedHashMap<>();
 
     ReportModelBuilder(AnalysisResult result) {
         this.result = result;
-        this.u = ReportUnits.of(result.job().report().units());
+        this.t = new Texts(ReportUnits.of(result.job().report().units()));
     }
 
-    ReportModel build(List<CheckOutcome> checks) {
+    Built build(List<CheckOutcome> checks) {
         Job job = result.job();
-        var p = job.project();
-        ReportModel.Project project = new ReportModel.Project(p.title(), p.number(), p.client(), p.location(), p.subject(),
-                p.preparedBy(), p.checkedBy(), p.date(), p.revision(), p.notes());
-        return new ReportModel(project, job.report().paper().name().toLowerCase(java.util.Locale.ROOT), Version.get(),
-                job.sha256(), job.name() + ".yaml", beam(), supports(), loads(),
-                List.of("Section", "Shape", "A (" + u.area().symbol() + ")", "I (" + u.secondMoment().symbol() + ")",
-                        "y_b (" + u.sectionLength().symbol() + ")", "S_top (" + u.firstMoment().symbol() + ")",
-                        "S_bot (" + u.firstMoment().symbol() + ")"),
-                sections(), result.combinationSource(), result.droppedCombinations(), reactionHeader(), reactions(),
-                envelope(), checks(checks), governing(checks), method(), cautions());
+        Project p = job.project();
+        ReportModel.Sheet sheet = new ReportModel.Sheet(p.title(), p.number(), p.subject(), p.revision(), p.preparedBy(),
+                p.date(), p.checkedBy(), p.client(), p.location(), job.report().paper().name().toLowerCase(Locale.ROOT),
+                Version.get(), job.name() + ".yaml");
+        drawings.put("sign-convention", new SignConventionSketch());
+        LoadingPart loading = new LoadingPart(result, t, drawings);
+        List<ReportModel.CombinationSheet> analyses = new CombinationPart(result, t, drawings).sheets(governing(checks));
+        ReportModel.Envelope envelope = new CombinationPart(result, t, drawings).envelope();
+        ReportModel.Stresses stresses = new StressPart(result, t).build();
+        ReportModel model = new ReportModel(sheet, cover(checks, analyses), basis(), loading.build(), analyses, envelope,
+                stresses, checks(checks), cautions(), reviewChecklist(), history(), appendix());
+        return new Built(model, drawings);
     }
 
-    private String len(double metres) {
-        return Numbers.format(u.length().fromSi(metres), u.length().symbol());
-    }
-
-    private String q(double si, Unit unit) {
-        return Numbers.format(unit.fromSi(si), unit.symbol());
-    }
-
-    private List<ReportModel.Row> beam() {
-        Job job = result.job();
-        List<ReportModel.Row> rows = new ArrayList<>();
-        rows.add(new ReportModel.Row("Length", len(job.beam().length())));
-        List<String> spans = result.spans().stream().map(s -> s.label() + " " + len(s.to() - s.from())).toList();
-        rows.add(new ReportModel.Row("Spans", String.join("; ", spans)));
-        rows.add(new ReportModel.Row("Section", job.beam().section()));
-        Material m = job.materials().get(job.beam().material());
-        rows.add(new ReportModel.Row("Material", m.id() + ", E = " + q(m.elasticModulus(), org.beamfolio.units.Units.of(
-                u.stress().symbol().equals("psi") ? "ksi" : "MPa")) + (m.source().isEmpty() ? "" : " (" + m.source() + ")")));
-        for (var s : job.beam().segments()) {
-            rows.add(new ReportModel.Row("Segment", len(s.from()) + " to " + len(s.to()) + ": section " + s.section()
-                    + ", material " + s.material()));
-        }
-        List<String> hinges = job.beam().hinges().stream().map(Hinge::at).map(this::len).toList();
-        rows.add(new ReportModel.Row("Hinges", hinges.isEmpty() ? "none" : String.join(", ", hinges)));
-        if (job.beam().selfWeightCase() != null) {
-            rows.add(new ReportModel.Row("Self weight", "included in case " + job.beam().selfWeightCase()));
-        }
-        return rows;
-    }
-
-    private List<List<String>> supports() {
-        List<List<String>> rows = new ArrayList<>();
-        for (Support s : result.job().beam().supports()) {
-            String detail = "";
-            if (s.kind() instanceof SupportKind.Spring sp) {
-                detail = "k = " + q(sp.k(), u.stiffness()) + (sp.kr() > 0 ? ", kr = " + q(sp.kr(), u.rotationalStiffness()) : "");
-            }
-            rows.add(List.of(len(s.at()), s.kind().label(), detail));
-        }
-        return rows;
-    }
-
-    private List<List<String>> loads() {
-        List<List<String>> rows = new ArrayList<>();
-        for (Load load : result.job().loads()) {
-            if (load instanceof Load.Point p) {
-                rows.add(List.of(p.loadCase(), "point", "P = " + q(p.P(), u.force()), "at " + len(p.at()), p.note()));
-            } else if (load instanceof Load.Couple c) {
-                rows.add(List.of(c.loadCase(), "couple", "M = " + q(Math.abs(c.M()), u.moment()) + (c.M() >= 0 ? " ccw" : " cw"),
-                        "at " + len(c.at()), c.note()));
-            } else if (load instanceof Load.Distributed d) {
-                String w = d.uniform() ? "w = " + q(d.wStart(), u.distributed())
-                        : "w = " + q(d.wStart(), u.distributed()) + " to " + q(d.wEnd(), u.distributed());
-                rows.add(List.of(d.loadCase(), d.uniform() ? "uniform" : "linear", w, len(d.from()) + " to " + len(d.to()), d.note()));
-            }
-        }
-        return rows;
-    }
-
-    private List<List<String>> sections() {
-        List<List<String>> rows = new ArrayList<>();
-        for (Map.Entry<String, SectionProperties> e : result.sections().entrySet()) {
-            SectionProperties s = e.getValue();
-            Section section = result.job().sections().get(e.getKey());
-            String shape = section.shape().getClass().getSimpleName().toLowerCase(java.util.Locale.ROOT) + (section.flip() ? ", flipped" : "");
-            rows.add(List.of(e.getKey(), shape, s.area() == null ? "not given" : q(s.area(), u.area()).replace(" " + u.area().symbol(), ""),
-                    Numbers.format(u.secondMoment().fromSi(s.inertia())), Numbers.format(u.sectionLength().fromSi(s.yBottom())),
-                    Numbers.format(u.firstMoment().fromSi(s.sTop())), Numbers.format(u.firstMoment().fromSi(s.sBottom()))));
-        }
-        return rows;
-    }
-
-    private List<String> reactionHeader() {
-        List<String> header = new ArrayList<>();
-        header.add("Combination");
-        for (Support s : result.job().beam().supports()) {
-            header.add(s.kind().label() + " at " + len(s.at()));
-        }
-        return header;
-    }
-
-    private List<List<String>> reactions() {
-        List<List<String>> rows = new ArrayList<>();
-        List<Support> supports = result.job().beam().supports();
-        for (CombinationResult c : result.combinations()) {
-            if (!c.arrangement().isEmpty()) {
-                continue;
-            }
-            List<String> row = new ArrayList<>();
-            row.add(c.name());
-            for (int i = 0; i < supports.size(); i++) {
-                String cell = q(c.response().reactionForce()[i], u.force());
-                if (supports.get(i).kind() instanceof SupportKind.Fixed || c.response().reactionMoment()[i] != 0) {
-                    cell += "; " + q(c.response().reactionMoment()[i], u.moment());
-                }
-                row.add(cell);
-            }
-            rows.add(row);
-        }
-        return rows;
-    }
-
-    private List<List<String>> envelope() {
+    /** The combinations that give an envelope extreme or govern a check, in the order they were formed. */
+    private List<CombinationResult> governing(List<CheckOutcome> checks) {
+        Set<String> names = new LinkedHashSet<>();
         Extremes e = result.envelope();
-        List<List<String>> rows = new ArrayList<>();
-        if (e == null) {
-            return rows;
+        if (e != null) {
+            names.add(e.momentMax().combination());
+            names.add(e.momentMin().combination());
+            names.add(e.shearMax().combination());
+            names.add(e.shearMin().combination());
+            names.add(e.deflectionMax().combination());
         }
-        rows.add(row("Shear V", e.shearMax(), e.shearMin(), u.force()));
-        rows.add(row("Moment M", e.momentMax(), e.momentMin(), u.moment()));
-        rows.add(row("Deflection (down +)", e.deflectionMax(), e.deflectionMin(), u.deflection()));
-        rows.add(row("Top fibre stress (tension +)", e.stressTopMax(), e.stressTopMin(), u.stress()));
-        rows.add(row("Bottom fibre stress (tension +)", e.stressBottomMax(), e.stressBottomMin(), u.stress()));
-        if (e.shearStressMax() != null) {
-            rows.add(List.of("Shear stress at neutral axis", q(e.shearStressMax().value(), u.stress()),
-                    len(e.shearStressMax().at()), e.shearStressMax().combination(), "", "", ""));
+        for (CheckOutcome c : checks) {
+            names.add(c.combination());
         }
-        return rows;
+        List<CombinationResult> out = new ArrayList<>();
+        for (CombinationResult c : result.combinations()) {
+            if (names.contains(c.name()) && out.size() < 4) {
+                out.add(c);
+            }
+        }
+        return out;
     }
 
-    private List<String> row(String label, Extreme max, Extreme min, Unit unit) {
-        return List.of(label, q(max.value(), unit), len(max.at()), max.combination(), q(min.value(), unit), len(min.at()),
-                min.combination());
+    private ReportModel.Cover cover(List<CheckOutcome> checks, List<ReportModel.CombinationSheet> analyses) {
+        Job job = result.job();
+        long spans = result.spans().stream().filter(s -> s.label().startsWith("span ")).count();
+        String layout = result.spans().stream().anyMatch(s -> s.label().contains("cantilever")) ? "cantilever"
+                : (spans == 1 ? "single-span" : spans + "-span continuous")
+                        + (result.spans().stream().anyMatch(s -> s.label().contains("overhang")) ? " beam with overhang" : " beam");
+        String scope = "Linear elastic analysis of the " + layout + " described below (" + t.len(job.beam().length())
+                + " long) for reactions, shear, moment, deflection and bending and shear stresses under "
+                + result.combinations().size() + " load combinations and arrangements, with "
+                + (checks.isEmpty() ? "no limit checks requested." : checks.size() + " checks against the stated limits.");
+        List<ReportModel.Row> contents = new ArrayList<>();
+        contents.add(new ReportModel.Row("Design basis", "basis"));
+        contents.add(new ReportModel.Row("Loading", "loading"));
+        for (ReportModel.CombinationSheet s : analyses) {
+            contents.add(new ReportModel.Row("Analysis: " + s.name(), s.anchor()));
+        }
+        contents.add(new ReportModel.Row("Envelope over all combinations", "envelope"));
+        contents.add(new ReportModel.Row("Section properties and stresses", "stresses"));
+        contents.add(new ReportModel.Row("Checks and summary", "checks"));
+        contents.add(new ReportModel.Row("Cautions", "cautions"));
+        contents.add(new ReportModel.Row("Reviewer sign-off", "review"));
+        contents.add(new ReportModel.Row("Revision history", "history"));
+        contents.add(new ReportModel.Row("Appendix: job file", "appendix"));
+        return new ReportModel.Cover(scope, contents);
     }
 
-    private List<List<String>> checks(List<CheckOutcome> checks) {
+    private ReportModel.Basis basis() {
+        Job job = result.job();
+        List<String> codes = new ArrayList<>();
+        codes.add("Load combinations: " + result.combinationSource() + ".");
+        for (DeflectionLimit d : job.deflectionLimits()) {
+            String cases = String.join(" + ", d.cases());
+            codes.add("Deflection under " + cases + ": " + (d.spanRatio() != null
+                    ? "span/" + Numbers.format(d.spanRatio()) + " (twice the length for an overhang or cantilever)"
+                    : "at most " + t.deflection(d.maximum())) + ", as set by the engineer from the governing code.");
+        }
+        for (Material m : job.materials().values()) {
+            if (!m.source().isBlank()) {
+                codes.add("Material " + m.id() + ": " + m.source() + ".");
+            }
+        }
+        codes.add("Governing building code and local amendments: as adopted by the authority having jurisdiction.");
+        ReportUnits u = t.units();
+        List<ReportModel.Row> units = List.of(
+                new ReportModel.Row("Positions and lengths", Texts.symbol(u.length())),
+                new ReportModel.Row("Forces, reactions, shear", Texts.symbol(u.force())),
+                new ReportModel.Row("Moments", Texts.symbol(u.moment())),
+                new ReportModel.Row("Line loads", Texts.symbol(u.distributed())),
+                new ReportModel.Row("Stresses", Texts.symbol(u.stress())),
+                new ReportModel.Row("Deflection", Texts.symbol(u.deflection())),
+                new ReportModel.Row("Section properties", Texts.symbol(u.sectionLength()) + ", " + Texts.symbol(u.area()) + ", "
+                        + Texts.symbol(u.firstMoment()) + ", " + Texts.symbol(u.secondMoment())));
+        List<String> conventions = List.of(
+                "x runs from the left end of the beam (x = 0) to the right end.",
+                "Loads act downward when positive; an upward load is negative. Couples are clockwise or counter-clockwise as drawn, x to the right and up on the page.",
+                "Reactions are positive upward; support moments positive counter-clockwise.",
+                "Bending moment is positive when sagging (tension in the bottom fibre); shear is positive when the part left of a cut is pushed up.",
+                "Deflection is positive downward; stress is positive in tension.");
+        List<String> method = List.of(
+                "Linear elastic analysis with small deflections; plane sections remain plane (Euler-Bernoulli beam theory); shear deformation is neglected.",
+                "Direct stiffness method, with a node at every support, hinge, load point, load end and change of section or material. Within each element EI is constant and the load linear, so shear, moment, slope and deflection are exact polynomials; the numbers come from a matrix solution of the nodal equilibrium equations, not from closed-form tables.",
+                "Extremes and their locations are found from the real roots of each polynomial's derivative, not by sampling.",
+                "Each load case is solved once; combinations and pattern arrangements are formed by superposition.");
+        List<String> limitations = List.of(
+                "Sections are modelled as rectangles without fillets or rounded corners, or by closed forms; given properties are used as stated.",
+                "Supports are points; springs are linear. Support settlement is not included unless modelled by a spring.",
+                "Not checked unless shown: lateral-torsional and local buckling, connections, bearing and web crippling, vibration, fire, fatigue, creep and second-order effects.");
+        List<String> materialHeader = List.of("Material", "E (" + (u.stress().symbol().equals("psi") ? "ksi" : "MPa") + ")",
+                "Density", "Allowable tension", "Allowable compression", "Allowable shear", "Source");
+        List<List<String>> materialRows = new ArrayList<>();
+        org.beamfolio.units.Unit modulus = org.beamfolio.units.Units.of(u.stress().symbol().equals("psi") ? "ksi" : "MPa");
+        org.beamfolio.units.Unit density = org.beamfolio.units.Units.of(u.stress().symbol().equals("psi") ? "pcf" : "kN/m^3");
+        for (Material m : job.materials().values()) {
+            materialRows.add(List.of(m.id(), t.plain(m.elasticModulus(), modulus),
+                    m.weightDensity() == null ? "not given" : t.q(m.weightDensity(), density),
+                    optional(m.allowableTension()), optional(m.allowableCompression()), optional(m.allowableShear()), m.source()));
+        }
+        return new ReportModel.Basis(codes, units, conventions, "sign-convention", method, limitations,
+                job.project().notes(), new ReportModel.Table(materialHeader, materialRows), new StressPart(result, t).summaryTable());
+    }
+
+    private String optional(Double stress) {
+        return stress == null ? "not given" : t.stress(stress);
+    }
+
+    private ReportModel.Checks checks(List<CheckOutcome> checks) {
         List<List<String>> rows = new ArrayList<>();
         for (CheckOutcome c : checks) {
-            rows.add(List.of(c.description(), Numbers.format(c.demand(), c.unit()), Numbers.format(c.limit(), c.unit()),
-                    Numbers.format(c.ratio()), c.pass() ? "meets limit" : "EXCEEDS LIMIT", c.combination(), len(c.at())));
+            rows.add(List.of(c.id(), c.description(), Numbers.format(c.demand(), c.unit()), Numbers.format(c.limit(), c.unit()),
+                    Numbers.format(c.ratio()), c.pass() ? "meets" : "EXCEEDS", c.combination(), t.len(c.at())));
         }
-        return rows;
-    }
-
-    private String governing(List<CheckOutcome> checks) {
-        return checks.stream().max(java.util.Comparator.comparingDouble(CheckOutcome::ratio))
-                .map(c -> "Governing ratio " + Numbers.format(c.ratio()) + " (" + c.id() + ", " + c.combination() + "): "
-                        + (c.pass() ? "within the limit" : "exceeds the limit"))
+        boolean allPass = checks.stream().allMatch(CheckOutcome::pass);
+        String governing = checks.stream().max(java.util.Comparator.comparingDouble(CheckOutcome::ratio))
+                .map(c -> "Governing ratio " + Numbers.format(c.ratio()) + ": " + c.id() + " under " + c.combination() + " at "
+                        + t.len(c.at()) + ". " + (allPass ? "Every check meets its limit." : "At least one check EXCEEDS its limit."))
                 .orElse("No checks were requested in the job file.");
-    }
-
-    private List<String> method() {
-        return List.of(
-                "Linear elastic analysis, small deflections, plane sections remain plane (Euler-Bernoulli beam theory); shear deformation is neglected.",
-                "Direct stiffness method with a node at every support, hinge, load point, load end and section change; within each element shear, moment, slope and deflection are exact polynomials, so extremes are located from roots, not by sampling.",
-                "Loads act downward when positive. Reactions are positive upward, support moments counter-clockwise; bending moment is positive when sagging; deflection is positive downward; stress is positive in tension.",
-                "Each load case is solved once; combinations and pattern arrangements are formed by superposition.",
-                "Sections are modelled as rectangles (fillets and rounded corners are not modelled) or by their closed forms; given properties are used as stated.");
+        return new ReportModel.Checks(new ReportModel.Table(List.of("Check", "What is checked", "Demand", "Limit", "Ratio",
+                "Result", "Combination", "At"), rows), governing, allPass, !checks.isEmpty());
     }
 
     private List<String> cautions() {
         return List.of(
-                "This package is valid only when reviewed, signed and sealed by a licensed professional engineer responsible for the design.",
-                "Loads, load combinations, support conditions and material values must be verified against the governing building code and the requirements of the authority having jurisdiction.",
-                "Not checked unless shown: lateral-torsional buckling, local buckling, connections, bearing, web crippling, vibration, fire, fatigue and long-term effects such as creep.",
-                "The analysis is linear elastic: it does not capture cracking, yielding, second-order effects or support settlement beyond the springs given.");
+                "This package is valid only when it has been reviewed, signed and sealed by a licensed professional engineer who takes responsibility for the design. The software does not replace the engineer's judgement.",
+                "Loads, load combinations, support conditions, section dimensions and material values are the engineer's inputs: verify them against the governing building code, the referenced standards and the requirements of the authority having jurisdiction.",
+                "The method's limits: linear elastic, small deflections, Euler-Bernoulli beams without shear deformation, point supports. Lateral-torsional buckling, local buckling, connections, bearing, web crippling, vibration, fire, fatigue, creep and second-order effects are not checked unless shown in this package.",
+                "Allowable stresses are those given in the job file; they must already include whatever reductions the governing standard requires.");
+    }
+
+    private List<String> reviewChecklist() {
+        return List.of("Loads and load combinations", "Geometry and support conditions", "Section and material properties",
+                "Analysis results and diagrams", "Checks and conclusions");
+    }
+
+    private List<List<String>> history() {
+        List<List<String>> rows = new ArrayList<>();
+        for (Project.Revision r : result.job().project().history()) {
+            rows.add(List.of(r.rev(), r.date(), r.by(), r.note()));
+        }
+        if (rows.isEmpty()) {
+            Project p = result.job().project();
+            rows.add(List.of(p.revision(), p.date(), p.preparedBy(), "(no history given in the job file)"));
+        }
+        return rows;
+    }
+
+    private ReportModel.Appendix appendix() {
+        List<ReportModel.Row> lines = new ArrayList<>();
+        String[] text = result.job().sourceText().split("\r?\n", -1);
+        int n = text.length;
+        if (n > 0 && text[n - 1].isEmpty()) {
+            n--;
+        }
+        for (int i = 0; i < n; i++) {
+            lines.add(new ReportModel.Row(Integer.toString(i + 1), text[i].replace("\t", "    ")));
+        }
+        return new ReportModel.Appendix(lines, result.job().sha256(), Version.get(), result.job().name() + ".yaml");
     }
 }

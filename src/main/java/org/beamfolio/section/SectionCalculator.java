@@ -84,7 +84,13 @@ public final class SectionCalculator {
             cuts.add(r.top());
         }
         List<SectionProperties.Junction> junctions = new ArrayList<>();
+        double previous = Double.NEGATIVE_INFINITY;
         for (double cut : cuts) {
+            // the top of one plate and the bottom of the next may differ by round-off only
+            if (cut - previous <= 1e-9 * depth) {
+                continue;
+            }
+            previous = cut;
             if (cut > 1e-12 * depth && cut < depth * (1 - 1e-12)) {
                 double below = widthAt(rects, cut - 1e-9 * depth);
                 double above = widthAt(rects, cut + 1e-9 * depth);

@@ -1,0 +1,299 @@
+package org.beamfolio.report;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import java.util.TreeSet;
+import org.beamfolio.analysis.AnalysisResult;
+import org.beamfolio.analysis.CombinationResult;
+import org.beamfolio.analysis.Extreme;
+import org.beamfolio.analysis.Extremes;
+import org.beamfolio.analysis.Field;
+import org.beamfolio.analysis.Response;
+import org.beamfolio.analysis.Roots;
+import org.beamfolio.model.Load;
+import org.beamfolio.model.Support;
+import org.beamfolio.report.drawing.Chart;
+import org.beamfolio.report.drawing.Drawing;
+import org.beamfolio.units.Unit;
+
+/** The analysis sheets of the governing combinations, and the envelope sheet. */
+final class CombinationPart {
+    private final AnalysisResult result;
+    private final Texts t;
+    private final Map<String, Drawing> drawings;
+
+    CombinationPart(AnalysisResult result, Texts t, Map<String, Drawing> drawings) {
+        this.result = result;
+        this.t = t;
+        this.drawings = drawings;
+    }
+
+    List<ReportModel.CombinationSheet> sheets(List<CombinationResult> governing) {
+        List<ReportModel.CombinationSheet> sheets = new ArrayList<>();
+        int i = 0;
+        for (CombinationResult c : governing) {
+            String id = "combination-" + i++;
+            sheets.add(new ReportModel.CombinationSheet(id, c.name(), governs(c), reactions(c.response()), equilibrium(c),
+                    figures(id, c), keyPoints(c.response())));
+        }
+        return sheets;
+    }
+
+    private String governs(CombinationResult c) {
+        List<String> what = new ArrayList<>();
+        Extremes e = result.envelope();
+        if (c.name().equals(e.momentMax().combination())) {
+            what.add("largest sagging moment");
+        }
+        if (c.name().equals(e.momentMin().combination())) {
+            what.add("largest hogging moment");
+        }
+        if (c.name().equals(e.shearMax().combination()) || c.name().equals(e.shearMin().combination())) {
+            what.add("largest shear");
+        }
+        if (c.name().equals(e.deflectionMax().combination())) {
+            what.add("largest deflection");
+        }
+        return what.isEmpty() ? "governs a check (see Checks)" : "Governs the " + String.join(", the ", what) + ".";
+    }
+
+    private ReportModel.Table reactions(Response r) {
+        List<List<String>> rows = new ArrayList<>();
+        List<Support> supports = result.job().beam().supports();
+        for (int i = 0; i < supports.size(); i++) {
+            boolean moment = r.reactionMoment()[i] != 0 || supports.get(i).kind().label().equals("fixed");
+            rows.add(List.of("R" + (i + 1), supports.get(i).kind().label(), t.len(supports.get(i).at()),
+                    t.force(r.reactionForce()[i]), moment ? t.moment(r.reactionMoment()[i]) : "-"));
+        }
+        return new ReportModel.Table(List.of("Reaction", "Support", "At", "Force (up +)", "Moment (ccw +)"), rows);
+    }
+
+    /** Total downward load and its moment about x = 0 (counter-clockwise positive) of each case. */
+    private double[] caseTotals(String loadCase) {
+        double force = 0;
+        double moment = 0;
+        for (Load load : result.loads()) {
+            if (!load.loadCase().equals(loadCase)) {
+                continue;
+            }
+            if (load instanceof Load.Point p) {
+                force += p.P();
+                moment -= p.P() * p.at();
+            } else if (load instanceof Load.Couple c) {
+                moment += c.M();
+            } else if (load instanceof Load.Distributed d) {
+                double total = d.resultant();
+                double sum = d.wStart() + d.wEnd();
+                double centroid = sum == 0 ? (d.from() + d.to()) / 2
+                        : d.from() + (d.to() - d.from()) * (d.wStart() + 2 * d.wEnd()) / (3 * sum);
+                force += total;
+                moment -= total * centroid;
+            }
+        }
+        return new double[] {force, moment};
+    }
+
+    /**
+     * The independent equilibrium check of a combination: the reactions against the factored
+     * applied loads, in force and in moment about x = 0, with the residual.
+     */
+    private List<ReportModel.Equation> equilibrium(CombinationResult c) {
+        Response r = c.response();
+        List<Support> supports = result.job().beam().supports();
+        List<String> rNames = new ArrayList<>();
+        List<String> rValues = new ArrayList<>();
+        List<String> mTerms = new ArrayList<>();
+        double sumR = 0;
+        double sumRM = 0;
+        for (int i = 0; i < supports.size(); i++) {
+            rNames.add("R" + (i + 1));
+            rValues.add(t.force(r.reactionForce()[i]));
+            sumR += r.reactionForce()[i];
+            double m = r.reactionForce()[i] * supports.get(i).at() + r.reactionMoment()[i];
+            sumRM += m;
+            mTerms.add("(" + t.force(r.reactionForce()[i]) + ")(" + t.len(supports.get(i).at()) + ")"
+                    + (r.reactionMoment()[i] != 0 ? " + (" + t.moment(r.reactionMoment()[i]) + ")" : ""));
+        }
+        List<String> loadTerms = new ArrayList<>();
+        List<String> loadMomentTerms = new ArrayList<>();
+        double applied = 0;
+        double appliedMoment = 0;
+        String pattern = c.arrangement().isEmpty() ? "" : " (pattern case on " + c.arrangement() + " only; totals as loaded)";
+        for (Map.Entry<String, Double> f : c.factors().entrySet()) {
+            double[] totals = caseTotals(f.getKey());
+            if (!c.arrangement().isEmpty() && result.job().pattern().contains(f.getKey())) {
+                totals = patternTotals(c, f.getKey());
+            }
+            applied += f.getValue() * totals[0];
+            appliedMoment += f.getValue() * totals[1];
+            loadTerms.add(Numbers.format(f.getValue()) + " × " + t.force(totals[0]) + " (" + f.getKey() + ")");
+            loadMomentTerms.add(Numbers.format(f.getValue()) + " × (" + t.moment(totals[1]) + ") (" + f.getKey() + ")");
+        }
+        double residualForce = sumR - applied;
+        double residualMoment = sumRM + appliedMoment;
+        List<ReportModel.Equation> out = new ArrayList<>();
+        out.add(new ReportModel.Equation("Vertical equilibrium" + pattern, "ΣFy = Σ R − Σ γ·W = 0",
+                String.join(" + ", rValues) + " − [" + String.join(" + ", loadTerms) + "] = " + t.force(sumR) + " − " + t.force(applied),
+                "residual " + t.force(residualForce), "statics: sum of vertical forces"));
+        out.add(new ReportModel.Equation("Moment equilibrium about x = 0 (ccw +)", "ΣM₀ = Σ R·x + Σ M_R + Σ γ·M_loads = 0",
+                String.join(" + ", mTerms) + " + [" + String.join(" + ", loadMomentTerms) + "] = " + t.moment(sumRM) + " + ("
+                        + t.moment(appliedMoment) + ")",
+                "residual " + t.moment(residualMoment), "statics: sum of moments about the left end"));
+        return out;
+    }
+
+    /** Totals of a pattern case over the loaded regions of an arrangement. */
+    private double[] patternTotals(CombinationResult c, String loadCase) {
+        double force = 0;
+        double moment = 0;
+        for (AnalysisResult.Span span : result.spans()) {
+            if (!loaded(c.arrangement(), span.label())) {
+                continue;
+            }
+            for (Load load : result.loads()) {
+                if (!load.loadCase().equals(loadCase)) {
+                    continue;
+                }
+                if (load instanceof Load.Point p && p.at() >= span.from() && (p.at() < span.to() || span.to() == result.job().beam().length())) {
+                    force += p.P();
+                    moment -= p.P() * p.at();
+                } else if (load instanceof Load.Couple cp && cp.at() >= span.from() && (cp.at() < span.to() || span.to() == result.job().beam().length())) {
+                    moment += cp.M();
+                } else if (load instanceof Load.Distributed d) {
+                    double a = Math.max(span.from(), d.from());
+                    double b = Math.min(span.to(), d.to());
+                    if (b > a) {
+                        double wa = d.intensityAt(a);
+                        double wb = d.intensityAt(b);
+                        double total = 0.5 * (wa + wb) * (b - a);
+                        double centroid = wa + wb == 0 ? (a + b) / 2 : a + (b - a) * (wa + 2 * wb) / (3 * (wa + wb));
+                        force += total;
+                        moment -= total * centroid;
+                    }
+                }
+            }
+        }
+        return new double[] {force, moment};
+    }
+
+    private static boolean loaded(String arrangement, String label) {
+        if (label.startsWith("span ")) {
+            String number = label.substring(5);
+            return java.util.Arrays.stream(arrangement.replaceAll("spans? ", "").split(",\\s*")).anyMatch(s -> s.equals(number));
+        }
+        return arrangement.contains(label);
+    }
+
+    private List<ReportModel.Figure> figures(String id, CombinationResult c) {
+        Response r = c.response();
+        Unit x = t.units().length();
+        String xLabel = "x (" + Texts.symbol(x) + ")";
+        List<ReportModel.Figure> out = new ArrayList<>();
+        drawings.put(id + "-shear", new Chart("V (" + Texts.symbol(t.units().force()) + ")", xLabel,
+                List.of(Sampling.series("V", r.shear(), x, t.units().force())),
+                marks(List.of(r.shear().max(), r.shear().min()), t.units().force()), false));
+        out.add(new ReportModel.Figure(id + "-shear", "Shear, " + c.name(), "52mm"));
+        drawings.put(id + "-moment", new Chart("M (" + Texts.symbol(t.units().moment()) + ")", xLabel,
+                List.of(Sampling.series("M", r.moment(), x, t.units().moment())),
+                marks(List.of(r.moment().max(), r.moment().min()), t.units().moment()), false));
+        out.add(new ReportModel.Figure(id + "-moment", "Bending moment (sagging +), " + c.name(), "52mm"));
+        drawings.put(id + "-deflection", new Chart("δ (" + Texts.symbol(t.units().deflection()) + ", down +)", xLabel,
+                List.of(Sampling.series("δ", r.deflection(), x, t.units().deflection())),
+                marks(List.of(r.deflection().max()), t.units().deflection()), true));
+        out.add(new ReportModel.Figure(id + "-deflection", "Deflection (down +), " + c.name(), "46mm"));
+        return out;
+    }
+
+    private List<Chart.Mark> marks(List<Extreme> extremes, Unit unit) {
+        List<Chart.Mark> marks = new ArrayList<>();
+        for (Extreme e : extremes) {
+            if (e.value() != 0) {
+                marks.add(new Chart.Mark(t.units().length().fromSi(e.at()), unit.fromSi(e.value()),
+                        t.q(e.value(), unit) + " at " + t.len(e.at())));
+            }
+        }
+        return marks;
+    }
+
+    /** Supports, hinges, load points and ends, and points of zero shear (each from its root). */
+    private ReportModel.Table keyPoints(Response r) {
+        TreeSet<Double> xs = new TreeSet<>();
+        double length = result.job().beam().length();
+        xs.add(0.0);
+        xs.add(length);
+        result.job().beam().supports().forEach(s -> xs.add(s.at()));
+        result.job().beam().hinges().forEach(h -> xs.add(h.at()));
+        for (Load load : result.job().loads()) {
+            if (load instanceof Load.Point p) {
+                xs.add(p.at());
+            } else if (load instanceof Load.Couple c) {
+                xs.add(c.at());
+            } else if (load instanceof Load.Distributed d) {
+                xs.add(d.from());
+                xs.add(d.to());
+            }
+        }
+        Field v = r.shear();
+        TreeSet<Double> zeroShear = new TreeSet<>();
+        for (int i = 0; i < v.size(); i++) {
+            for (double s : Roots.in(v.piece(i), 0, v.end(i) - v.start(i))) {
+                if (s > 0 && s < v.end(i) - v.start(i)) {
+                    zeroShear.add(v.start(i) + s);
+                }
+            }
+        }
+        xs.addAll(zeroShear);
+        List<List<String>> rows = new ArrayList<>();
+        for (double x : xs) {
+            String vl = x == 0 ? "-" : t.force(v.leftOf(x));
+            String vr = x == length ? "-" : t.force(v.at(x));
+            rows.add(List.of(t.len(x), vl, vr, t.moment(x == length ? r.moment().leftOf(x) : r.moment().at(x)),
+                    t.deflection(r.deflection().at(x)), zeroShear.contains(x) ? "zero shear" : ""));
+        }
+        if (rows.size() > 40) {
+            rows = rows.subList(0, 40);
+        }
+        return new ReportModel.Table(List.of("x", "V left", "V right", "M", "Deflection", "Note"), rows);
+    }
+
+    ReportModel.Envelope envelope() {
+        Extremes e = result.envelope();
+        List<List<String>> rows = new ArrayList<>();
+        rows.add(row("Shear V", e.shearMax(), e.shearMin(), t.units().force()));
+        rows.add(row("Moment M (sagging +)", e.momentMax(), e.momentMin(), t.units().moment()));
+        rows.add(row("Deflection (down +)", e.deflectionMax(), e.deflectionMin(), t.units().deflection()));
+        rows.add(row("Top fibre stress (tension +)", e.stressTopMax(), e.stressTopMin(), t.units().stress()));
+        rows.add(row("Bottom fibre stress (tension +)", e.stressBottomMax(), e.stressBottomMin(), t.units().stress()));
+        if (e.shearStressMax() != null) {
+            rows.add(List.of("Shear stress, largest", t.stress(e.shearStressMax().value()), t.len(e.shearStressMax().at()),
+                    e.shearStressMax().combination(), "", "", ""));
+        }
+        Unit x = t.units().length();
+        String xLabel = "x (" + Texts.symbol(x) + ")";
+        List<Field> shear = result.combinations().stream().map(c -> c.response().shear()).toList();
+        List<Field> moment = result.combinations().stream().map(c -> c.response().moment()).toList();
+        List<Field> deflection = result.combinations().stream().map(c -> c.response().deflection()).toList();
+        drawings.put("envelope-shear", new Chart("V (" + Texts.symbol(t.units().force()) + ")", xLabel,
+                List.of(Sampling.envelope("largest", shear, 1, x, t.units().force()), Sampling.envelope("smallest", shear, -1, x, t.units().force())),
+                marks(List.of(e.shearMax(), e.shearMin()), t.units().force()), false));
+        drawings.put("envelope-moment", new Chart("M (" + Texts.symbol(t.units().moment()) + ")", xLabel,
+                List.of(Sampling.envelope("largest", moment, 1, x, t.units().moment()), Sampling.envelope("smallest", moment, -1, x, t.units().moment())),
+                marks(List.of(e.momentMax(), e.momentMin()), t.units().moment()), false));
+        drawings.put("envelope-deflection", new Chart("δ (" + Texts.symbol(t.units().deflection()) + ", down +)", xLabel,
+                List.of(Sampling.envelope("largest", deflection, 1, x, t.units().deflection()), Sampling.envelope("smallest", deflection, -1, x, t.units().deflection())),
+                marks(List.of(e.deflectionMax()), t.units().deflection()), true));
+        List<ReportModel.Figure> figures = List.of(
+                new ReportModel.Figure("envelope-shear", "Shear envelope", "50mm"),
+                new ReportModel.Figure("envelope-moment", "Moment envelope", "50mm"),
+                new ReportModel.Figure("envelope-deflection", "Deflection envelope", "46mm"));
+        int arrangements = (int) result.combinations().stream().filter(c -> !c.arrangement().isEmpty()).count();
+        return new ReportModel.Envelope(new ReportModel.Table(List.of("Quantity", "Largest", "At", "Combination", "Smallest", "At",
+                "Combination"), rows), figures, arrangements);
+    }
+
+    private List<String> row(String label, Extreme max, Extreme min, Unit unit) {
+        return List.of(label, t.q(max.value(), unit), t.len(max.at()), max.combination(), t.q(min.value(), unit), t.len(min.at()),
+                min.combination());
+    }
+}

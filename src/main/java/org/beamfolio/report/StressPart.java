@@ -1,0 +1,175 @@
+package org.beamfolio.report;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import org.beamfolio.analysis.AnalysisResult;
+import org.beamfolio.analysis.CombinationResult;
+import org.beamfolio.analysis.Extreme;
+import org.beamfolio.analysis.Extremes;
+import org.beamfolio.model.Section;
+import org.beamfolio.section.SectionProperties;
+import org.beamfolio.units.Unit;
+import org.beamfolio.units.Units;
+
+/**
+ * Section properties (with the parallel axis table for sections built of rectangles) and the
+ * governing stresses worked out: sigma = M c / I at the extreme fibres and tau = V Q / (I t),
+ * with the unit conversion shown.
+ */
+final class StressPart {
+    private final AnalysisResult result;
+    private final Texts t;
+    private final boolean us;
+
+    StressPart(AnalysisResult result, Texts t) {
+        this.result = result;
+        this.t = t;
+        this.us = t.units().length().symbol().equals("ft");
+    }
+
+    ReportModel.Table summaryTable() {
+        var u = t.units();
+        List<List<String>> rows = new ArrayList<>();
+        for (Map.Entry<String, SectionProperties> e : result.sections().entrySet()) {
+            SectionProperties s = e.getValue();
+            rows.add(List.of(e.getKey(), shapeName(result.job().sections().get(e.getKey())),
+                    s.area() == null ? "not given" : t.plain(s.area(), u.area()), t.plain(s.inertia(), u.secondMoment()),
+                    t.plain(s.yBottom(), u.sectionLength()), t.plain(s.sTop(), u.firstMoment()), t.plain(s.sBottom(), u.firstMoment())));
+        }
+        return new ReportModel.Table(List.of("Section", "Shape", "A (" + Texts.symbol(u.area()) + ")", "I (" + Texts.symbol(u.secondMoment()) + ")",
+                "y_b (" + Texts.symbol(u.sectionLength()) + ")", "S_top (" + Texts.symbol(u.firstMoment()) + ")",
+                "S_bot (" + Texts.symbol(u.firstMoment()) + ")"), rows);
+    }
+
+    static String shapeName(Section section) {
+        String name = switch (section.shape().getClass().getSimpleName()) {
+            case "IBeam" -> "I shape";
+            case "Given" -> "given properties";
+            case "Plates" -> "built-up plates";
+            default -> section.shape().getClass().getSimpleName().toLowerCase(Locale.ROOT);
+        };
+        return name + (section.flip() ? ", flipped" : "");
+    }
+
+    ReportModel.Stresses build() {
+        List<ReportModel.SectionSheet> sheets = new ArrayList<>();
+        var u = t.units();
+        for (Map.Entry<String, SectionProperties> e : result.sections().entrySet()) {
+            SectionProperties s = e.getValue();
+            List<ReportModel.Row> props = new ArrayList<>();
+            props.add(new ReportModel.Row("Shape", shapeName(result.job().sections().get(e.getKey()))));
+            props.add(new ReportModel.Row("Depth", t.q(s.depth(), u.sectionLength())));
+            if (s.area() != null) {
+                props.add(new ReportModel.Row("A", t.q(s.area(), u.area())));
+            }
+            props.add(new ReportModel.Row("Centroid above the bottom, y_b", t.q(s.yBottom(), u.sectionLength())));
+            props.add(new ReportModel.Row("I about the centroidal axis", t.q(s.inertia(), u.secondMoment())));
+            props.add(new ReportModel.Row("c_top, c_bottom", t.q(s.cTop(), u.sectionLength()) + ", " + t.q(s.cBottom(), u.sectionLength())));
+            props.add(new ReportModel.Row("S_top = I / c_top, S_bottom = I / c_bottom", t.q(s.sTop(), u.firstMoment()) + ", "
+                    + t.q(s.sBottom(), u.firstMoment())));
+            if (s.qNeutral() != null) {
+                props.add(new ReportModel.Row("Q at the neutral axis, width t there", t.q(s.qNeutral(), u.firstMoment()) + ", "
+                        + (s.tNeutral() == null ? "not given" : t.q(s.tNeutral(), u.sectionLength()))));
+            }
+            for (SectionProperties.Junction j : s.junctions()) {
+                props.add(new ReportModel.Row("Q at the junction " + t.q(j.height(), u.sectionLength()) + " above the bottom, width",
+                        t.q(Math.abs(j.q()), u.firstMoment()) + ", " + t.q(j.width(), u.sectionLength())));
+            }
+            List<List<String>> parts = new ArrayList<>();
+            double sumA = 0;
+            double sumAy = 0;
+            double sumI = 0;
+            for (SectionProperties.Part p : s.parts()) {
+                parts.add(List.of(t.plain(p.b(), u.sectionLength()) + " × " + t.plain(p.h(), u.sectionLength()),
+                        t.plain(p.area(), u.area()), t.plain(p.centroid(), u.sectionLength()), t.plain(p.area() * p.centroid(), u.firstMoment()),
+                        t.plain(p.ownInertia(), u.secondMoment()), t.plain(p.transferInertia(), u.secondMoment())));
+                sumA += p.area();
+                sumAy += p.area() * p.centroid();
+                sumI += p.ownInertia() + p.transferInertia();
+            }
+            if (!parts.isEmpty()) {
+                parts.add(List.of("Sum", t.plain(sumA, u.area()), "y_b = ΣAy/ΣA = " + t.plain(sumAy / sumA, u.sectionLength()),
+                        t.plain(sumAy, u.firstMoment()), "I = Σ(I_own + A·d²)", t.plain(sumI, u.secondMoment())));
+            }
+            String l = Texts.symbol(u.sectionLength());
+            ReportModel.Table table = new ReportModel.Table(List.of("Plate b × h (" + l + ")", "A (" + Texts.symbol(u.area()) + ")",
+                    "y (" + l + ")", "A·y (" + Texts.symbol(u.firstMoment()) + ")", "I_own = b·h³/12 (" + Texts.symbol(u.secondMoment()) + ")",
+                    "A·d² (" + Texts.symbol(u.secondMoment()) + ")"), parts);
+            sheets.add(new ReportModel.SectionSheet(e.getKey(), props, table));
+        }
+        return new ReportModel.Stresses(sheets, equations());
+    }
+
+    private List<ReportModel.Equation> equations() {
+        List<ReportModel.Equation> out = new ArrayList<>();
+        Extremes e = result.envelope();
+        if (e == null) {
+            return out;
+        }
+        boolean topTension = e.stressTopMax().value() > e.stressBottomMax().value();
+        Extreme tension = topTension ? e.stressTopMax() : e.stressBottomMax();
+        boolean topCompression = e.stressTopMin().value() < e.stressBottomMin().value();
+        Extreme compression = topCompression ? e.stressTopMin() : e.stressBottomMin();
+        if (tension.value() > 0) {
+            out.add(fibre("Largest tension", tension, topTension));
+        }
+        if (compression.value() < 0) {
+            out.add(fibre("Largest compression", compression, topCompression));
+        }
+        if (e.shearStressMax() != null && e.shearStressMax().value() > 0) {
+            out.add(shear(e.shearStressMax()));
+        }
+        return out;
+    }
+
+    private CombinationResult combination(String name) {
+        return result.combinations().stream().filter(c -> c.name().equals(name)).findFirst().orElseThrow();
+    }
+
+    private ReportModel.Equation fibre(String what, Extreme stress, boolean top) {
+        CombinationResult c = combination(stress.combination());
+        double x = stress.at();
+        int element = result.model().elementAt(x);
+        var field = c.response().moment();
+        double m = field.piece(element).at(x - field.start(element));
+        SectionProperties s = result.model().section(element);
+        double cFibre = top ? s.cTop() : s.cBottom();
+        Unit small = t.units().sectionLength();
+        String momentInSmall = us ? "(" + t.moment(m) + " × 12 in/ft)" : "(" + t.moment(m) + " × 10⁶ N·mm per kN·m)";
+        double sigma = (top ? -1 : 1) * m * cFibre / s.inertia();
+        String fibre = top ? "top" : "bottom";
+        String sense = m >= 0 ? "sagging" : "hogging";
+        return new ReportModel.Equation(what + ": " + fibre + " fibre at x = " + t.len(x) + " under " + c.name() + ", " + sense
+                + " moment, section " + result.model().sectionId(element),
+                "σ = " + (top ? "−" : "") + "M·c_" + fibre + " / I",
+                "σ = " + (top ? "−" : "") + momentInSmall + " × " + t.q(cFibre, small) + " / " + t.q(s.inertia(), t.units().secondMoment()),
+                t.stress(sigma), "flexure formula, elementary beam theory (plane sections)");
+    }
+
+    private ReportModel.Equation shear(Extreme tau) {
+        CombinationResult c = combination(tau.combination());
+        double x = tau.at();
+        int element = result.model().elementAt(x);
+        var field = c.response().shear();
+        double v = field.piece(element).at(x - field.start(element));
+        SectionProperties s = result.model().section(element);
+        double q = s.qNeutral();
+        double width = s.tNeutral();
+        String where = "the neutral axis";
+        for (SectionProperties.Junction j : s.junctions()) {
+            if (Math.abs(j.q()) / j.width() > q / width) {
+                q = Math.abs(j.q());
+                width = j.width();
+                where = "the junction " + t.q(j.height(), t.units().sectionLength()) + " above the bottom";
+            }
+        }
+        Unit force = us ? Units.of("lb") : Units.of("N");
+        return new ReportModel.Equation("Largest shear stress: at " + where + ", x = " + t.len(x) + " under " + c.name(),
+                "τ = V·Q / (I·t)",
+                "τ = " + t.q(Math.abs(v), force) + " × " + t.q(q, t.units().firstMoment()) + " / (" + t.q(s.inertia(), t.units().secondMoment())
+                        + " × " + t.q(width, t.units().sectionLength()) + ")",
+                t.stress(Math.abs(v) * q / (s.inertia() * width)), "shear formula, elementary beam theory");
+    }
+}
