@@ -43,16 +43,19 @@ final class CombinationPart {
     private String governs(CombinationResult c) {
         List<String> what = new ArrayList<>();
         Extremes e = result.envelope();
-        if (c.name().equals(e.momentMax().combination())) {
+        if (e.momentMax().value() > 0 && c.name().equals(e.momentMax().combination())) {
             what.add("largest sagging moment");
         }
-        if (c.name().equals(e.momentMin().combination())) {
+        if (e.momentMin().value() < 0 && c.name().equals(e.momentMin().combination())) {
             what.add("largest hogging moment");
         }
-        if (c.name().equals(e.shearMax().combination()) || c.name().equals(e.shearMin().combination())) {
+        Extreme shear = Math.abs(e.shearMax().value()) >= Math.abs(e.shearMin().value()) ? e.shearMax() : e.shearMin();
+        if (c.name().equals(shear.combination())) {
             what.add("largest shear");
         }
-        if (c.name().equals(e.deflectionMax().combination())) {
+        Extreme deflection = Math.abs(e.deflectionMax().value()) >= Math.abs(e.deflectionMin().value())
+                ? e.deflectionMax() : e.deflectionMin();
+        if (c.name().equals(deflection.combination())) {
             what.add("largest deflection");
         }
         return what.isEmpty() ? "governs a check (see Checks)" : "Governs the " + String.join(", the ", what) + ".";
@@ -245,16 +248,29 @@ final class CombinationPart {
         }
         xs.addAll(zeroShear);
         List<List<String>> rows = new ArrayList<>();
+        double vScale = scale(v);
+        double mScale = scale(r.moment());
+        double dScale = scale(r.deflection());
         for (double x : xs) {
-            String vl = x == 0 ? "-" : t.force(v.leftOf(x));
-            String vr = x == length ? "-" : t.force(v.at(x));
-            rows.add(List.of(t.len(x), vl, vr, t.moment(x == length ? r.moment().leftOf(x) : r.moment().at(x)),
-                    t.deflection(r.deflection().at(x)), zeroShear.contains(x) ? "zero shear" : ""));
+            String vl = x == 0 ? "-" : t.force(clean(v.leftOf(x), vScale));
+            String vr = x == length ? "-" : t.force(clean(v.at(x), vScale));
+            double m = x == length ? r.moment().leftOf(x) : r.moment().at(x);
+            rows.add(List.of(t.len(x), vl, vr, t.moment(clean(m, mScale)),
+                    t.deflection(clean(r.deflection().at(x), dScale)), zeroShear.contains(x) ? "zero shear" : ""));
         }
         if (rows.size() > 40) {
             rows = rows.subList(0, 40);
         }
         return new ReportModel.Table(List.of("x", "V left", "V right", "M", "Deflection", "Note"), rows);
+    }
+
+    private static double scale(Field f) {
+        return Math.max(Math.abs(f.max().value()), Math.abs(f.min().value()));
+    }
+
+    /** Round-off (a value below 1e-10 of the diagram's largest) printed as the zero it stands for. */
+    private static double clean(double value, double scale) {
+        return Math.abs(value) <= 1e-10 * scale ? 0 : value;
     }
 
     ReportModel.Envelope envelope() {

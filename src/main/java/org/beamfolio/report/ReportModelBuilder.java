@@ -58,11 +58,17 @@ final class ReportModelBuilder {
         Set<String> names = new LinkedHashSet<>();
         Extremes e = result.envelope();
         if (e != null) {
-            names.add(e.momentMax().combination());
-            names.add(e.momentMin().combination());
-            names.add(e.shearMax().combination());
-            names.add(e.shearMin().combination());
-            names.add(e.deflectionMax().combination());
+            // an extreme of zero (no sagging on a cantilever) is a tie that every combination shares
+            if (e.momentMax().value() > 0) {
+                names.add(e.momentMax().combination());
+            }
+            if (e.momentMin().value() < 0) {
+                names.add(e.momentMin().combination());
+            }
+            names.add(Math.abs(e.shearMax().value()) >= Math.abs(e.shearMin().value())
+                    ? e.shearMax().combination() : e.shearMin().combination());
+            names.add(Math.abs(e.deflectionMax().value()) >= Math.abs(e.deflectionMin().value())
+                    ? e.deflectionMax().combination() : e.deflectionMin().combination());
         }
         for (CheckOutcome c : checks) {
             names.add(c.combination());

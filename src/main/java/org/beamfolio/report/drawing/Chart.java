@@ -89,8 +89,8 @@ public final class Chart implements Drawing {
             double angle = up ? (toLeft ? -3 * Math.PI / 4 : -Math.PI / 4) : (toLeft ? 3 * Math.PI / 4 : Math.PI / 4);
             XYPointerAnnotation a = new XYPointerAnnotation(m.label(), m.x(), m.y(), angle);
             a.setFont(Style.font(6.5f));
-            a.setArrowLength(8);
-            a.setBaseRadius(12);
+            a.setArrowLength(6);
+            a.setBaseRadius(8);
             a.setTipRadius(1);
             a.setTextAnchor(up ? (toLeft ? TextAnchor.BOTTOM_RIGHT : TextAnchor.BOTTOM_LEFT)
                     : (toLeft ? TextAnchor.TOP_RIGHT : TextAnchor.TOP_LEFT));
