@@ -62,7 +62,7 @@ public final class Analysis {
         for (int i = 0; i < combinations.size(); i++) {
             Combination c = combinations.get(i);
             Response r = combine(model, cases, c.factors(), c.name());
-            results.add(new CombinationResult(c.name(), c.factors(), references.get(i), "", r, stresses.extremes(r)));
+            results.add(new CombinationResult(c.name(), c.factors(), references.get(i), "", List.of(), r, stresses.extremes(r)));
         }
         List<AnalysisResult.Span> spans = Spans.of(job.beam());
         if (!job.pattern().isEmpty()) {
@@ -134,7 +134,13 @@ public final class Analysis {
                         }
                     }
                 }
-                results.add(new CombinationResult(name, combination.factors(), references.get(c), arrangement, r,
+                List<Integer> regions = new ArrayList<>();
+                for (int i = 0; i < loaded.length; i++) {
+                    if (loaded[i]) {
+                        regions.add(i);
+                    }
+                }
+                results.add(new CombinationResult(name, combination.factors(), references.get(c), arrangement, regions, r,
                         stresses.extremes(r)));
             }
         }

@@ -16,13 +16,13 @@ import org.beamfolio.model.SupportKind;
  * v = v1 + integral of the slope. Signs inside: deflection v and forces positive up, rotations
  * and couples counter-clockwise, loads q positive down; M positive sagging.
  */
-final class CaseSolver {
+public final class CaseSolver {
     private CaseSolver() {}
 
     /** Per element, the downward line load as q(s) = q0 + q1 s. */
-    record ElementLoads(double[] q0, double[] q1, double[] nodalForce, double[] nodalCouple) {}
+    public record ElementLoads(double[] q0, double[] q1, double[] nodalForce, double[] nodalCouple) {}
 
-    static ElementLoads loadsOf(StructureModel m, List<Load> loads) {
+    public static ElementLoads loadsOf(StructureModel m, List<Load> loads) {
         int elements = m.elements();
         double[] q0 = new double[elements];
         double[] q1 = new double[elements];
@@ -157,7 +157,7 @@ final class CaseSolver {
      * Work-equivalent nodal loads (up and counter-clockwise positive) of a downward load
      * q0 + q1 s: minus the integral of each Hermite shape function times q.
      */
-    static double[] equivalentLoads(double l, double q0, double q1) {
+    public static double[] equivalentLoads(double l, double q0, double q1) {
         Polynomial q = Polynomial.of(q0, q1);
         Polynomial[] shape = {
             Polynomial.of(1, 0, -3 / (l * l), 2 / (l * l * l)),

@@ -10,7 +10,7 @@ import org.beamfolio.model.Load;
  * beyond the first or last support, numbered left to right; and a case's loads cut at their
  * borders, so each region's share can be solved alone.
  */
-final class Spans {
+public final class Spans {
     private Spans() {}
 
     static List<AnalysisResult.Span> of(Beam beam) {
@@ -34,7 +34,7 @@ final class Spans {
     }
 
     /** The part of each load that lies in [from, to); a point load on a border goes to the region on its right. */
-    static List<Load> within(List<Load> loads, double from, double to, boolean last) {
+    public static List<Load> within(List<Load> loads, double from, double to, boolean last) {
         List<Load> result = new ArrayList<>();
         for (Load load : loads) {
             if (load instanceof Load.Point p && inside(p.at(), from, to, last)) {

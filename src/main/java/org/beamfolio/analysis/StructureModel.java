@@ -78,6 +78,11 @@ public final class StructureModel {
         return materialIds[element];
     }
 
+    /** How many unknown displacements and rotations the model has (before supports restrain them). */
+    public int unknowns() {
+        return unknowns;
+    }
+
     public double ei(int element) {
         return ei[element];
     }

@@ -6,7 +6,7 @@ import org.beamfolio.analysis.CombinationResult;
 import org.beamfolio.analysis.Extreme;
 import org.beamfolio.analysis.Extremes;
 import org.beamfolio.model.Support;
-import org.beamfolio.report.Numbers;
+import org.beamfolio.units.Numbers;
 import org.beamfolio.results.CheckOutcome;
 import org.beamfolio.results.ReportUnits;
 import org.beamfolio.units.Unit;

@@ -1,5 +1,6 @@
 package org.beamfolio.report;
 
+import org.beamfolio.units.Numbers;
 import java.util.ArrayList;
 import java.util.LinkedHashSet;
 import java.util.List;

@@ -1,5 +1,6 @@
 package org.beamfolio.report;
 
+import org.beamfolio.units.Numbers;
 import org.beamfolio.results.ReportUnits;
 import org.beamfolio.units.Unit;
 

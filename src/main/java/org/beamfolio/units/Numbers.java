@@ -1,4 +1,4 @@
-package org.beamfolio.report;
+package org.beamfolio.units;
 
 import java.math.BigDecimal;
 import java.math.MathContext;

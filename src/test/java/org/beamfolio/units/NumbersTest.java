@@ -1,4 +1,4 @@
-package org.beamfolio.report;
+package org.beamfolio.units;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 

@@ -1,0 +1,94 @@
+package org.beamfolio.derivation;
+
+import java.util.List;
+import org.beamfolio.analysis.AnalysisResult;
+import org.beamfolio.analysis.CombinationResult;
+import org.beamfolio.model.Beam;
+import org.beamfolio.model.Load;
+import org.beamfolio.model.SupportKind;
+
+/**
+ * The derivation stage's entry point: for a combination, the worked solution a reviewer can
+ * follow by hand, chosen by what the beam is. Two vertical supports: statics. One fixed support:
+ * statics of a cantilever. Rigid supports, constant EI, no hinges: Clapeyron's three-moment
+ * equation. Anything else (springs, hinges in continuous spans, varying EI): the stiffness
+ * method, stated as such. Every derivation ends with the shear and moment table by the area method.
+ */
+public final class Derivations {
+    private Derivations() {}
+
+    public enum Method { STATICS, CANTILEVER, THREE_MOMENT, STIFFNESS }
+
+    public static Method methodFor(AnalysisResult result) {
+        Beam beam = result.job().beam();
+        boolean rigid = beam.supports().stream().noneMatch(s -> s.kind() instanceof SupportKind.Spring);
+        boolean noHinges = beam.hinges().isEmpty();
+        long fixed = beam.supports().stream().filter(s -> s.kind() instanceof SupportKind.Fixed).count();
+        if (rigid && noHinges && beam.supports().size() == 2 && fixed == 0) {
+            return Method.STATICS;
+        }
+        if (rigid && noHinges && beam.supports().size() == 1 && fixed == 1) {
+            return Method.CANTILEVER;
+        }
+        boolean constantEi = true;
+        double ei = result.model().ei(0);
+        for (int e = 1; e < result.model().elements(); e++) {
+            constantEi &= Math.abs(result.model().ei(e) - ei) <= 1e-12 * ei;
+        }
+        // a fixed support must be the beam's end: with an overhang beyond it the moment jumps there
+        boolean fixedOnlyAtEnds = beam.supports().stream().filter(s -> s.kind() instanceof SupportKind.Fixed)
+                .allMatch(s -> s.at() == 0 || s.at() == beam.length());
+        boolean noCoupleOnInteriorSupports = result.loads().stream().filter(l -> l instanceof Load.Couple)
+                .noneMatch(l -> beam.supports().stream().anyMatch(s -> s.at() == ((Load.Couple) l).at()));
+        if (rigid && noHinges && constantEi && fixedOnlyAtEnds && noCoupleOnInteriorSupports
+                && beam.supports().size() >= 2 && beam.supports().size() <= 60) {
+            return Method.THREE_MOMENT;
+        }
+        return Method.STIFFNESS;
+    }
+
+    /** Deflection at each region's middle and its largest in the region, from the exact elastic curve. */
+    private static void deflections(AnalysisResult result, CombinationResult c, Notation n, Steps steps) {
+        var d = c.response().deflection();
+        String unit = Notation.sym(n.deflection);
+        for (AnalysisResult.Span span : result.spans()) {
+            double mid = 0.5 * (span.from() + span.to());
+            steps.add("Deflection at the middle of " + span.label() + " (x = " + Steps.n(n.x(mid), n.xu()) + ")",
+                    "EI v'' = M, integrated exactly element by element with the support and continuity conditions",
+                    "δ = " + Steps.n(n.deflection.fromSi(d.at(mid)), unit), n.deflection.fromSi(d.at(mid)), unit,
+                    "exact integration of the elastic curve");
+            org.beamfolio.analysis.Extreme worst = new org.beamfolio.analysis.Extreme(0, span.from(), null);
+            for (int i = 0; i < d.size(); i++) {
+                if (d.start(i) >= span.from() - 1e-12 && d.end(i) <= span.to() + 1e-12) {
+                    for (int sign : new int[] {1, -1}) {
+                        var e = d.extremeOf(i, sign);
+                        if (Math.abs(e.value()) > Math.abs(worst.value())) {
+                            worst = e;
+                        }
+                    }
+                }
+            }
+            steps.add("Largest deflection in " + span.label() + ", where the slope is zero (a root of the slope polynomial)",
+                    "v'(x) = 0", "δ_max = " + Steps.n(n.deflection.fromSi(worst.value()), unit) + " at x = " + Steps.n(n.x(worst.at()), n.xu()),
+                    n.deflection.fromSi(worst.value()), unit, "exact integration of the elastic curve");
+        }
+    }
+
+    public static Derivation of(AnalysisResult result, CombinationResult combination) {
+        List<Load> loads = FactoredLoads.of(result, combination);
+        Notation n = new Notation(result);
+        Steps steps = new Steps();
+        Method method = methodFor(result);
+        String title = switch (method) {
+            case STATICS -> new StaticsDerivation(result, combination, loads, n, steps).write();
+            case CANTILEVER -> new CantileverDerivation(result, combination, loads, n, steps).write();
+            case THREE_MOMENT -> new ThreeMomentDerivation(result, combination, loads, n, steps).write();
+            case STIFFNESS -> new StiffnessDerivation(result, combination, loads, n, steps).write();
+        };
+        AreaMethod area = new AreaMethod(result, combination, loads, n, steps);
+        area.zeroShearSteps();
+        deflections(result, combination, n, steps);
+        return new Derivation(combination.name(), title, steps.list(), area.header(), area.rows(),
+                "Shear and moment by the area method between key points");
+    }
+}

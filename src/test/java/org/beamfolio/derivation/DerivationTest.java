@@ -1,0 +1,161 @@
+package org.beamfolio.derivation;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.stream.Stream;
+import org.beamfolio.TestJobs;
+import org.beamfolio.analysis.AnalysisResult;
+import org.beamfolio.analysis.CombinationResult;
+import org.beamfolio.model.Load;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.Arguments;
+import org.junit.jupiter.params.provider.MethodSource;
+
+/**
+ * The derivation agrees with the solver and with itself: support moments and reactions of the
+ * three-moment equation equal the stiffness solution to 1e-9, and every printed step, its
+ * numbers read back and re-evaluated, gives its printed result.
+ */
+class DerivationTest {
+    static final String LOADS = """
+              - { case: D, type: uniform, w: 10 kN/m }
+              - { case: D, type: point, P: 25 kN, at: 2.5 m }
+              - { case: D, type: linear, w: [0 kN/m, 6 kN/m], from: 3.2 m, to: 5.6 m }
+              - { case: D, type: moment, M: 8 kN*m, at: 1.3 m, sense: cw }
+            """;
+
+    static Stream<Arguments> continuous() {
+        return Stream.of(
+                Arguments.of("three equal spans (AISC Manual Table 3-23, three equal spans, uniform load)",
+                        "    - { at: 0 m, type: pin }\n    - { at: 2 m, type: roller }\n    - { at: 4 m, type: roller }\n    - { at: 6 m, type: roller }\n"),
+                Arguments.of("two spans, both ends fixed", "    - { at: 0 m, type: fixed }\n    - { at: 2.5 m, type: roller }\n    - { at: 6 m, type: fixed }\n"),
+                Arguments.of("propped single span", "    - { at: 0 m, type: fixed }\n    - { at: 6 m, type: roller }\n"),
+                Arguments.of("overhangs both ends", "    - { at: 0.8 m, type: pin }\n    - { at: 3 m, type: roller }\n    - { at: 5.2 m, type: roller }\n"));
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("continuous")
+    void threeMomentSupportMomentsAndReactionsEqualTheSolver(String name, String supports) {
+        AnalysisResult r = TestJobs.solve(TestJobs.text("6 m", supports, LOADS));
+        assertEquals(Derivations.Method.THREE_MOMENT, Derivations.methodFor(r));
+        CombinationResult c = r.combinations().get(0);
+        ThreeMomentDerivation d = new ThreeMomentDerivation(r, c, FactoredLoads.of(r, c), new Notation(r), new Steps());
+        d.write();
+        double scale = Math.abs(c.response().moment().min().value()) + Math.abs(c.response().moment().max().value());
+        double forceScale = c.response().shear().max().value() - c.response().shear().min().value();
+        var supportsList = r.job().beam().supports();
+        for (int j = 0; j < supportsList.size(); j++) {
+            double x = supportsList.get(j).at();
+            double solver = x == r.job().beam().length() ? c.response().moment().leftOf(x) : c.response().moment().at(x);
+            if (x == 0 || x == r.job().beam().length()) {
+                // at a fixed end the internal moment is the support's: M(0+) = -M_R, M(L-) = +M_R
+                solver = x == 0 ? -c.response().reactionMoment()[j] : c.response().reactionMoment()[j];
+            }
+            assertEquals(solver, d.solution().supportMoments()[j], 1e-9 * scale, "support moment " + (j + 1));
+            assertEquals(c.response().reactionForce()[j], d.solution().reactions()[j], 1e-9 * forceScale, "reaction " + (j + 1));
+        }
+    }
+
+    @Test
+    void twoEqualSpansReproduceThePublishedSupportMoment() {
+        // AISC Manual Table 3-23, two equal spans, uniform load: M over the middle support -wl^2/8 (l = 3 m, w = 10 kN/m)
+        AnalysisResult r = TestJobs.solve(TestJobs.text("6 m",
+                "    - { at: 0 m, type: pin }\n    - { at: 3 m, type: roller }\n    - { at: 6 m, type: roller }\n",
+                "  - { case: D, type: uniform, w: 10 kN/m }\n"));
+        CombinationResult c = r.combinations().get(0);
+        ThreeMomentDerivation d = new ThreeMomentDerivation(r, c, FactoredLoads.of(r, c), new Notation(r), new Steps());
+        d.write();
+        assertEquals(-10e3 * 9 / 8, d.solution().supportMoments()[1], 1e-9 * 10e3);
+    }
+
+    @Test
+    void staticsReactionsEqualTheSolverAndTheCheckAgrees() {
+        AnalysisResult r = TestJobs.solve(TestJobs.text("6 m", "    - { at: 0.5 m, type: pin }\n    - { at: 4.5 m, type: roller }\n", LOADS));
+        assertEquals(Derivations.Method.STATICS, Derivations.methodFor(r));
+        Derivation d = Derivations.of(r, r.combinations().get(0));
+        List<Step> reactions = d.steps().stream().filter(s -> !Double.isNaN(s.value()) && s.statement().contains("reaction")).toList();
+        double rb = reactions.get(0).value();
+        double ra = reactions.get(1).value();
+        double check = reactions.get(2).value();
+        // SI job: kN
+        assertEquals(r.combinations().get(0).response().reactionForce()[1] / 1e3, rb, 1e-9 * Math.abs(rb));
+        assertEquals(r.combinations().get(0).response().reactionForce()[0] / 1e3, ra, 1e-9 * Math.abs(ra));
+        assertEquals(ra, check, 1e-9 * Math.abs(ra), "moments about B agree with vertical equilibrium");
+    }
+
+    static Stream<Arguments> everyKindOfBeam() {
+        List<Arguments> out = new ArrayList<>();
+        out.add(Arguments.of("statics", "    - { at: 0.5 m, type: pin }\n    - { at: 4.5 m, type: roller }\n"));
+        out.add(Arguments.of("cantilever", "    - { at: 0 m, type: fixed }\n"));
+        out.add(Arguments.of("three-moment", "    - { at: 0 m, type: fixed }\n    - { at: 2.5 m, type: roller }\n    - { at: 6 m, type: roller }\n"));
+        out.add(Arguments.of("stiffness (spring)", "    - { at: 0 m, type: pin }\n    - { at: 3 m, type: spring, k: 900 kN/m }\n    - { at: 6 m, type: roller }\n"));
+        return out.stream();
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("everyKindOfBeam")
+    void everyPrintedStepReEvaluatesToItsPrintedResult(String name, String supports) {
+        AnalysisResult r = TestJobs.solve(TestJobs.text("6 m", supports, LOADS));
+        Derivation d = Derivations.of(r, r.combinations().get(0));
+        int checked = 0;
+        for (Step s : d.steps()) {
+            if (s.substituted().isEmpty() || s.substituted().contains(";") || s.substituted().contains(", ")) {
+                continue;
+            }
+            String rhs = s.substituted().substring(s.substituted().indexOf(" = ") + 3);
+            if (rhs.contains(" at ")) {
+                rhs = rhs.substring(0, rhs.indexOf(" at "));
+            }
+            double printed = Double.parseDouble(s.result().split(" ")[0].replace(",", ""));
+            double evaluated = Arithmetic.evaluate(rhs);
+            // the printed inputs are rounded to four figures; the printed result comes from full precision
+            double tolerance = 5e-3 * Math.max(Math.abs(printed), largestNumber(rhs) * 1e-2) + 1e-9;
+            assertEquals(printed, evaluated, tolerance, "step " + s.number() + ": " + s.statement() + "\n  " + s.substituted());
+            assertEquals(s.value(), printed, 5e-4 * Math.abs(s.value()) + 1e-12, "the printed result rounds the kept value");
+            checked++;
+        }
+        assertTrue(checked >= 3, "steps were checked: " + checked);
+    }
+
+    private static double largestNumber(String text) {
+        double max = 0;
+        for (String token : text.replaceAll("\\[[^\\]0-9]*\\]", "").replaceAll("(?<=\\d),(?=\\d{3})", "").split("[^0-9.e]+")) {
+            if (!token.isEmpty() && !token.equals(".") && !token.equals("e")) {
+                try {
+                    max = Math.max(max, Math.abs(Double.parseDouble(token)));
+                } catch (NumberFormatException ignored) {
+                    // not a number: skipped
+                }
+            }
+        }
+        return max;
+    }
+
+    @Test
+    void zeroShearIsLocatedByItsEquation() {
+        // simple span 6 m, w = 10 kN/m: zero shear at the middle, x = 0 + 30 kN / (10 kN/m) = 3 m (statics)
+        AnalysisResult r = TestJobs.solve(TestJobs.text("6 m", "    - { at: 0 m, type: pin }\n    - { at: 6 m, type: roller }\n",
+                "  - { case: D, type: uniform, w: 10 kN/m }\n"));
+        Derivation d = Derivations.of(r, r.combinations().get(0));
+        Step zero = d.steps().stream().filter(s -> s.statement().startsWith("Point of zero shear")).findFirst().orElseThrow();
+        assertEquals(3.0, zero.value(), 1e-12);
+        assertTrue(zero.substituted().contains("30 [kN] / 10 [kN/m]"), zero.substituted());
+        assertTrue(d.table().size() >= 2, "the area-method table has a row per stretch");
+    }
+
+    @Test
+    void areaMethodTableAddsUp() {
+        AnalysisResult r = TestJobs.solve(TestJobs.text("6 m", "    - { at: 0 m, type: pin }\n    - { at: 6 m, type: roller }\n", LOADS));
+        CombinationResult c = r.combinations().get(0);
+        var v = c.response().shear();
+        var m = c.response().moment();
+        // the moment at the right end is the sum of all the shear areas plus the couples' steps (zero at a roller end)
+        double sum = AreaMethod.shearArea(v, 0, 6);
+        double couples = FactoredLoads.of(r, c).stream().filter(l -> l instanceof Load.Couple).mapToDouble(l -> -((Load.Couple) l).M()).sum();
+        assertEquals(m.leftOf(6), m.at(0) + sum + couples, 1e-9 * Math.abs(m.max().value()));
+    }
+}
