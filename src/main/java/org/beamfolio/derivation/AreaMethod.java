@@ -96,7 +96,7 @@ final class AreaMethod {
                 substituted = "V1 = " + Steps.n(n.f(v1), n.fu()) + ", w1 = " + Steps.n(n.w(wk[0]), n.wu()) + ", k = "
                         + Steps.n(n.w(wk[1]) / n.x(1), n.wu() + " per " + n.xu()) + ", x1 = " + Steps.n(n.x(x1), n.xu());
             }
-            steps.add("Point of zero shear between " + Numbers.format(n.x(x1)) + " and the next key point (largest moment nearby)",
+            steps.add("Point of zero shear after x = " + Steps.n(n.x(x1), n.xu()) + " (a largest moment is there)",
                     symbolic, substituted, n.x(x1 + s), n.xu(), "dV/dx = −w (equilibrium of a beam element)");
         }
     }

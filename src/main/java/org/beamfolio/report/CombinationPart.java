@@ -12,6 +12,10 @@ import org.beamfolio.analysis.Extremes;
 import org.beamfolio.analysis.Field;
 import org.beamfolio.analysis.Response;
 import org.beamfolio.analysis.Roots;
+import org.beamfolio.derivation.Derivation;
+import org.beamfolio.derivation.Derivations;
+import org.beamfolio.derivation.FactoredLoads;
+import org.beamfolio.derivation.Step;
 import org.beamfolio.model.Load;
 import org.beamfolio.model.Support;
 import org.beamfolio.report.drawing.Chart;
@@ -35,8 +39,16 @@ final class CombinationPart {
         int i = 0;
         for (CombinationResult c : governing) {
             String id = "combination-" + i++;
+            Derivation d = Derivations.of(result, c);
+            List<ReportModel.NumberedStep> numbered = new ArrayList<>();
+            for (Step s : d.steps()) {
+                numbered.add(new ReportModel.NumberedStep(Integer.toString(s.number()), s.statement(), s.symbolic(), s.substituted(),
+                        s.result(), s.source(), s.uses().isEmpty() ? "" : "uses step " + String.join(", ",
+                        s.uses().stream().map(String::valueOf).toList())));
+            }
             sheets.add(new ReportModel.CombinationSheet(id, c.name(), governs(c), reactions(c.response()), equilibrium(c),
-                    figures(id, c), keyPoints(c.response())));
+                    figures(id, c), keyPoints(c.response()), d.method(), numbered,
+                    new ReportModel.Table(d.tableHeader(), d.table()), d.tableTitle()));
         }
         return sheets;
     }
@@ -73,29 +85,28 @@ final class CombinationPart {
         return new ReportModel.Table(List.of("Reaction", "Support", "At", "Force (up +)", "Moment (ccw +)"), rows);
     }
 
-    /** Total downward load and its moment about x = 0 (counter-clockwise positive) of each case. */
-    private double[] caseTotals(String loadCase) {
-        double force = 0;
-        double moment = 0;
-        for (Load load : result.loads()) {
-            if (!load.loadCase().equals(loadCase)) {
-                continue;
-            }
-            if (load instanceof Load.Point p) {
-                force += p.P();
-                moment -= p.P() * p.at();
-            } else if (load instanceof Load.Couple c) {
-                moment += c.M();
-            } else if (load instanceof Load.Distributed d) {
-                double total = d.resultant();
-                double sum = d.wStart() + d.wEnd();
-                double centroid = sum == 0 ? (d.from() + d.to()) / 2
-                        : d.from() + (d.to() - d.from()) * (d.wStart() + 2 * d.wEnd()) / (3 * sum);
-                force += total;
-                moment -= total * centroid;
-            }
+    /** Factored total downward load and its moment about x = 0 (counter-clockwise positive), case by case. */
+    private Map<String, double[]> factoredTotals(CombinationResult c) {
+        Map<String, double[]> totals = new java.util.LinkedHashMap<>();
+        for (Load load : FactoredLoads.of(result, c)) {
+            double[] t = totals.computeIfAbsent(load.loadCase(), k -> new double[2]);
+            double f = load instanceof Load.Point p ? p.P() : load instanceof Load.Distributed d ? d.resultant() : 0;
+            t[0] += f;
+            t[1] += -f * position(load) + (load instanceof Load.Couple cp ? cp.M() : 0);
         }
-        return new double[] {force, moment};
+        return totals;
+    }
+
+    private static double position(Load load) {
+        if (load instanceof Load.Point p) {
+            return p.at();
+        }
+        if (load instanceof Load.Couple c) {
+            return c.at();
+        }
+        Load.Distributed d = (Load.Distributed) load;
+        double sum = d.wStart() + d.wEnd();
+        return sum == 0 ? (d.from() + d.to()) / 2 : d.from() + (d.to() - d.from()) * (d.wStart() + 2 * d.wEnd()) / (3 * sum);
     }
 
     /**
@@ -123,70 +134,24 @@ final class CombinationPart {
         List<String> loadMomentTerms = new ArrayList<>();
         double applied = 0;
         double appliedMoment = 0;
-        String pattern = c.arrangement().isEmpty() ? "" : " (pattern case on " + c.arrangement() + " only; totals as loaded)";
-        for (Map.Entry<String, Double> f : c.factors().entrySet()) {
-            double[] totals = caseTotals(f.getKey());
-            if (!c.arrangement().isEmpty() && result.job().pattern().contains(f.getKey())) {
-                totals = patternTotals(c, f.getKey());
-            }
-            applied += f.getValue() * totals[0];
-            appliedMoment += f.getValue() * totals[1];
-            loadTerms.add(Numbers.format(f.getValue()) + " × " + t.force(totals[0]) + " (" + f.getKey() + ")");
-            loadMomentTerms.add(Numbers.format(f.getValue()) + " × (" + t.moment(totals[1]) + ") (" + f.getKey() + ")");
+        String pattern = c.arrangement().isEmpty() ? "" : " (pattern case on " + c.arrangement() + " only)";
+        for (Map.Entry<String, double[]> f : factoredTotals(c).entrySet()) {
+            applied += f.getValue()[0];
+            appliedMoment += f.getValue()[1];
+            loadTerms.add(t.force(f.getValue()[0]) + " (" + f.getKey() + ")");
+            loadMomentTerms.add("(" + t.moment(f.getValue()[1]) + ") (" + f.getKey() + ")");
         }
         double residualForce = sumR - applied;
         double residualMoment = sumRM + appliedMoment;
         List<ReportModel.Equation> out = new ArrayList<>();
-        out.add(new ReportModel.Equation("Vertical equilibrium" + pattern, "ΣFy = Σ R − Σ γ·W = 0",
+        out.add(new ReportModel.Equation("Vertical equilibrium" + pattern, "ΣFy = Σ R − Σ factored loads = 0",
                 String.join(" + ", rValues) + " − [" + String.join(" + ", loadTerms) + "] = " + t.force(sumR) + " − " + t.force(applied),
                 "residual " + t.force(residualForce), "statics: sum of vertical forces"));
-        out.add(new ReportModel.Equation("Moment equilibrium about x = 0 (ccw +)", "ΣM₀ = Σ R·x + Σ M_R + Σ γ·M_loads = 0",
+        out.add(new ReportModel.Equation("Moment equilibrium about x = 0 (ccw +)", "ΣM₀ = Σ R·x + Σ M_R + Σ M of the factored loads = 0",
                 String.join(" + ", mTerms) + " + [" + String.join(" + ", loadMomentTerms) + "] = " + t.moment(sumRM) + " + ("
                         + t.moment(appliedMoment) + ")",
                 "residual " + t.moment(residualMoment), "statics: sum of moments about the left end"));
         return out;
-    }
-
-    /** Totals of a pattern case over the loaded regions of an arrangement. */
-    private double[] patternTotals(CombinationResult c, String loadCase) {
-        double force = 0;
-        double moment = 0;
-        for (AnalysisResult.Span span : result.spans()) {
-            if (!loaded(c.arrangement(), span.label())) {
-                continue;
-            }
-            for (Load load : result.loads()) {
-                if (!load.loadCase().equals(loadCase)) {
-                    continue;
-                }
-                if (load instanceof Load.Point p && p.at() >= span.from() && (p.at() < span.to() || span.to() == result.job().beam().length())) {
-                    force += p.P();
-                    moment -= p.P() * p.at();
-                } else if (load instanceof Load.Couple cp && cp.at() >= span.from() && (cp.at() < span.to() || span.to() == result.job().beam().length())) {
-                    moment += cp.M();
-                } else if (load instanceof Load.Distributed d) {
-                    double a = Math.max(span.from(), d.from());
-                    double b = Math.min(span.to(), d.to());
-                    if (b > a) {
-                        double wa = d.intensityAt(a);
-                        double wb = d.intensityAt(b);
-                        double total = 0.5 * (wa + wb) * (b - a);
-                        double centroid = wa + wb == 0 ? (a + b) / 2 : a + (b - a) * (wa + 2 * wb) / (3 * (wa + wb));
-                        force += total;
-                        moment -= total * centroid;
-                    }
-                }
-            }
-        }
-        return new double[] {force, moment};
-    }
-
-    private static boolean loaded(String arrangement, String label) {
-        if (label.startsWith("span ")) {
-            String number = label.substring(5);
-            return java.util.Arrays.stream(arrangement.replaceAll("spans? ", "").split(",\\s*")).anyMatch(s -> s.equals(number));
-        }
-        return arrangement.contains(label);
     }
 
     private List<ReportModel.Figure> figures(String id, CombinationResult c) {
@@ -274,6 +239,32 @@ final class CombinationPart {
         return Math.abs(value) <= 1e-10 * scale ? 0 : value;
     }
 
+    /** The equilibrium check of every combination and arrangement, one row each. */
+    private ReportModel.Table everyEquilibrium() {
+        List<List<String>> rows = new ArrayList<>();
+        List<Support> supports = result.job().beam().supports();
+        for (CombinationResult c : result.combinations()) {
+            if (rows.size() == 200) {
+                rows.add(List.of("(" + (result.combinations().size() - 200) + " more, each checked the same way)", "", "", "", ""));
+                break;
+            }
+            double sumR = 0;
+            double sumM = 0;
+            for (int i = 0; i < supports.size(); i++) {
+                sumR += c.response().reactionForce()[i];
+                sumM += c.response().reactionForce()[i] * supports.get(i).at() + c.response().reactionMoment()[i];
+            }
+            double applied = 0;
+            double appliedMoment = 0;
+            for (double[] v : factoredTotals(c).values()) {
+                applied += v[0];
+                appliedMoment += v[1];
+            }
+            rows.add(List.of(c.name(), t.force(sumR), t.force(applied), t.force(sumR - applied), t.moment(sumM + appliedMoment)));
+        }
+        return new ReportModel.Table(List.of("Combination", "Σ R", "Σ factored loads", "Residual ΣFy", "Residual ΣM about x = 0"), rows);
+    }
+
     ReportModel.Envelope envelope() {
         Extremes e = result.envelope();
         List<List<String>> rows = new ArrayList<>();
@@ -306,7 +297,7 @@ final class CombinationPart {
                 new ReportModel.Figure("envelope-deflection", "Deflection envelope", "46mm"));
         int arrangements = (int) result.combinations().stream().filter(c -> !c.arrangement().isEmpty()).count();
         return new ReportModel.Envelope(new ReportModel.Table(List.of("Quantity", "Largest", "At", "Combination", "Smallest", "At",
-                "Combination"), rows), figures, arrangements);
+                "Combination"), rows), figures, arrangements, everyEquilibrium());
     }
 
     private List<String> row(String label, Extreme max, Extreme min, Unit unit) {

@@ -34,9 +34,14 @@ public record ReportModel(Sheet sheet, Cover cover, Basis basis, Loading loading
                           Table combinations, List<String> dropped, List<String> patternNote) {}
 
     public record CombinationSheet(String anchor, String name, String governs, Table reactions, List<Equation> equilibrium,
-                                   List<Figure> figures, Table keyPoints) {}
+                                   List<Figure> figures, Table keyPoints, String method, List<NumberedStep> steps,
+                                   Table areaMethod, String areaMethodTitle) {}
 
-    public record Envelope(Table extremes, List<Figure> figures, int arrangements) {}
+    /** A derivation step as printed: its number, what it finds, the working and the steps it draws on. */
+    public record NumberedStep(String number, String statement, String symbolic, String substituted, String result,
+                               String source, String uses) {}
+
+    public record Envelope(Table extremes, List<Figure> figures, int arrangements, Table equilibrium) {}
 
     public record SectionSheet(String id, List<Row> properties, Table parts) {}
 
