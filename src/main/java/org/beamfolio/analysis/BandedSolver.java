@@ -9,8 +9,10 @@ package org.beamfolio.analysis;
 final class BandedSolver {
     private final int n;
     private final int bandwidth;
-    /** band[i][k] holds K[i][i + k]. */
+    /** band[i][k] holds K[i][i + k]; after {@link #solve} it holds the Cholesky factor. */
     private final double[][] band;
+    /** The matrix as assembled, kept for the residuals of iterative refinement. */
+    private double[][] original;
     private final boolean[] restrained;
 
     BandedSolver(int n, int bandwidth) {
@@ -78,6 +80,10 @@ final class BandedSolver {
                 f[i] = 0;
             }
         }
+        original = new double[n][];
+        for (int i = 0; i < n; i++) {
+            original[i] = band[i].clone();
+        }
         double minPivot = Double.POSITIVE_INFINITY;
         double maxPivot = 0;
         // L^T L = K with L^T upper banded, stored over the band
@@ -104,7 +110,53 @@ final class BandedSolver {
                 band[i][j] = sum / pivot;
             }
         }
-        double[] y = f;
+        if (pivotRatio != null && pivotRatio.length > 0) {
+            pivotRatio[0] = minPivot / maxPivot;
+        }
+        double[] hi = substitute(f);
+        double[] lo = new double[n];
+        // Iterative refinement with residuals in double-double precision, the solution kept as
+        // hi + lo: a short, stiff element beside long ones makes the matrix ill-conditioned, and
+        // refinement recovers the digits the factorisation loses; lo keeps the digits that the
+        // element end forces need where nearly equal displacements are subtracted.
+        for (int pass = 0; pass < 4; pass++) {
+            double[] correction = substitute(residual(f, hi, lo));
+            for (int i = 0; i < n; i++) {
+                double small = lo[i] + correction[i];
+                double sum = hi[i] + small;
+                lo[i] = small - (sum - hi[i]);
+                hi[i] = sum;
+            }
+        }
+        low = lo;
+        return hi;
+    }
+
+    private double[] low;
+
+    /** The low-order part of the last solution (hi + lo is the refined solution). */
+    double[] lowPart() {
+        return low;
+    }
+
+    /** r = f - K (hi + lo), each row accumulated exactly (two-product and two-sum) and rounded once. */
+    private double[] residual(double[] f, double[] hi, double[] lo) {
+        double[] r = new double[n];
+        for (int i = 0; i < n; i++) {
+            Compensated sum = new Compensated(f[i]);
+            for (int j = Math.max(0, i - bandwidth); j <= Math.min(n - 1, i + bandwidth); j++) {
+                double k = j >= i ? original[i][j - i] : original[j][i - j];
+                sum.addProduct(-k, hi[j]);
+                sum.add(-k * lo[j]);
+            }
+            r[i] = restrained[i] ? 0 : sum.value();
+        }
+        return r;
+    }
+
+    /** Forward and back substitution with the factor. */
+    private double[] substitute(double[] f) {
+        double[] y = f.clone();
         for (int i = 0; i < n; i++) {
             double sum = y[i];
             for (int k = 1; k <= bandwidth && i - k >= 0; k++) {
@@ -118,9 +170,6 @@ final class BandedSolver {
                 sum -= band[i][k] * y[i + k];
             }
             y[i] = sum / band[i][0];
-        }
-        if (pivotRatio != null && pivotRatio.length > 0) {
-            pivotRatio[0] = minPivot / maxPivot;
         }
         return y;
     }

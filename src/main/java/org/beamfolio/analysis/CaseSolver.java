@@ -84,59 +84,137 @@ public final class CaseSolver {
         }
         double[] ratio = new double[1];
         double[] d = k.solve(f, ratio);
-        return fields(m, loads, feq, d, name, ratio[0]);
+        return fields(m, loads, feq, d, k.lowPart(), name, ratio[0]);
     }
 
-    private static Response fields(StructureModel m, ElementLoads loads, double[][] feq, double[] d, String name,
+    private static Response fields(StructureModel m, ElementLoads loads, double[][] feq, double[] d, double[] dLow, String name,
                                    double pivotRatio) {
         int elements = m.elements();
-        Polynomial[] shear = new Polynomial[elements];
-        Polynomial[] moment = new Polynomial[elements];
-        Polynomial[] slope = new Polynomial[elements];
-        Polynomial[] deflection = new Polynomial[elements];
-        double[] nodeForce = new double[m.x.length];
-        double[] nodeCouple = new double[m.x.length];
+        Compensated[] force = new Compensated[m.x.length];
+        Compensated[] couple = new Compensated[m.x.length];
+        for (int i = 0; i < m.x.length; i++) {
+            force[i] = new Compensated(0);
+            couple[i] = new Compensated(0);
+        }
         for (int e = 0; e < elements; e++) {
             double length = m.x[e + 1] - m.x[e];
             int[] dofs = dofs(m, e);
             double[][] ke = stiffness(m.ei[e], length);
-            double[] end = new double[4];
             for (int i = 0; i < 4; i++) {
-                double sum = -feq[e][i];
+                Compensated sum = i % 2 == 0 ? force[i < 2 ? e : e + 1] : couple[i < 2 ? e : e + 1];
+                sum.add(-feq[e][i]);
                 for (int j = 0; j < 4; j++) {
-                    sum += ke[i][j] * d[dofs[j]];
+                    sum.addProduct(ke[i][j], d[dofs[j]]);
+                    sum.add(ke[i][j] * dLow[dofs[j]]);
                 }
-                end[i] = sum;
             }
-            nodeForce[e] += end[0];
-            nodeCouple[e] += end[1];
-            nodeForce[e + 1] += end[2];
-            nodeCouple[e + 1] += end[3];
-            Polynomial q = Polynomial.of(loads.q0()[e], loads.q1()[e]);
-            shear[e] = q.integral(0).times(-1).plus(Polynomial.of(end[0]));
-            moment[e] = shear[e].integral(-end[1]);
-            slope[e] = moment[e].times(1 / m.ei[e]).integral(d[dofs[1]]);
-            Polynomial up = slope[e].integral(d[dofs[0]]);
-            deflection[e] = up.times(-1);
+        }
+        double[] nodeForce = new double[m.x.length];
+        double[] nodeCouple = new double[m.x.length];
+        for (int i = 0; i < m.x.length; i++) {
+            nodeForce[i] = force[i].value();
+            nodeCouple[i] = couple[i].value();
         }
         int supports = m.supports.size();
         double[] reactionForce = new double[supports];
         double[] reactionMoment = new double[supports];
+        double[] nodeReaction = new double[m.x.length];
+        double[] nodeReactionMoment = new double[m.x.length];
         for (int s = 0; s < supports; s++) {
             int node = m.supportNode[s];
             Support support = m.supports.get(s);
-            // node equilibrium: reaction + applied load = what the elements draw from the node
-            reactionForce[s] = nodeForce[node] - loads.nodalForce()[node];
-            if (support.kind() instanceof SupportKind.Fixed
-                    || (support.kind() instanceof SupportKind.Spring sp && sp.kr() > 0)) {
-                reactionMoment[s] = nodeCouple[node] - loads.nodalCouple()[node];
+            if (support.kind() instanceof SupportKind.Spring spring) {
+                // a spring's force follows from its own deflection, free of the elements' cancellation
+                reactionForce[s] = -spring.k() * (d[m.v[node]] + dLow[m.v[node]]);
+                reactionMoment[s] = -spring.kr() * (d[m.thetaLeft[node]] + dLow[m.thetaLeft[node]]);
+            } else {
+                // node equilibrium: reaction + applied load = what the elements draw from the node
+                reactionForce[s] = nodeForce[node] - loads.nodalForce()[node];
+                if (support.kind() instanceof SupportKind.Fixed) {
+                    reactionMoment[s] = nodeCouple[node] - loads.nodalCouple()[node];
+                }
             }
+        }
+        closeByStatics(m, loads, reactionForce, reactionMoment);
+        for (int s = 0; s < supports; s++) {
+            nodeReaction[m.supportNode[s]] = reactionForce[s];
+            nodeReactionMoment[m.supportNode[s]] = reactionMoment[s];
+        }
+        // Shear and moment by statics, marching from the left end with the reactions: the internal
+        // forces then balance the loads exactly, even where a short stiff element makes its own end
+        // forces (k d) lose digits to cancellation.
+        Polynomial[] shear = new Polynomial[elements];
+        Polynomial[] moment = new Polynomial[elements];
+        Polynomial[] slope = new Polynomial[elements];
+        Polynomial[] deflection = new Polynomial[elements];
+        double v = 0;
+        double mo = 0;
+        for (int e = 0; e < elements; e++) {
+            v += nodeReaction[e] + loads.nodalForce()[e];
+            mo -= nodeReactionMoment[e] + loads.nodalCouple()[e];
+            double length = m.x[e + 1] - m.x[e];
+            int[] dofs = dofs(m, e);
+            Polynomial q = Polynomial.of(loads.q0()[e], loads.q1()[e]);
+            shear[e] = q.integral(0).times(-1).plus(Polynomial.of(v));
+            moment[e] = shear[e].integral(mo);
+            slope[e] = moment[e].times(1 / m.ei[e]).integral(d[dofs[1]]);
+            deflection[e] = slope[e].integral(d[dofs[0]]).times(-1);
+            v = shear[e].at(length);
+            mo = moment[e].at(length);
         }
         double[] starts = m.elementStarts();
         double[] ends = m.elementEnds();
         return new Response(name, reactionForce, reactionMoment, new Field(starts, ends, shear),
                 new Field(starts, ends, moment), new Field(starts, ends, slope), new Field(starts, ends, deflection),
                 pivotRatio);
+    }
+
+    /**
+     * Sets the vertical reactions of the first and last supports (or the force and moment of a
+     * lone support) from the two equations of global equilibrium, the other reactions being those
+     * of the stiffness solution. The stiffness solution already satisfies equilibrium to its
+     * round-off; this makes it exact, so the statics that follow close at the free ends.
+     */
+    private static void closeByStatics(StructureModel m, ElementLoads loads, double[] force, double[] moment) {
+        Compensated f = new Compensated(0);
+        Compensated mo = new Compensated(0);
+        for (int node = 0; node < m.x.length; node++) {
+            f.add(loads.nodalForce()[node]);
+            mo.addProduct(loads.nodalForce()[node], m.x[node]);
+            mo.add(loads.nodalCouple()[node]);
+        }
+        for (int e = 0; e < m.elements(); e++) {
+            double length = m.x[e + 1] - m.x[e];
+            double q0 = loads.q0()[e];
+            double q1 = loads.q1()[e];
+            double total = q0 * length + q1 * length * length / 2;
+            double firstMoment = q0 * length * length / 2 + q1 * length * length * length / 3;
+            f.add(-total);
+            mo.addProduct(-total, m.x[e]);
+            mo.add(-firstMoment);
+        }
+        int n = force.length;
+        if (n == 1) {
+            force[0] = -f.value();
+            // moments about the support: the reaction force there has no arm
+            moment[0] = -(mo.value() - f.value() * m.x[m.supportNode[0]]);
+            return;
+        }
+        int a = 0;
+        int b = n - 1;
+        for (int s = 0; s < n; s++) {
+            if (s != a && s != b) {
+                f.add(force[s]);
+                mo.addProduct(force[s], m.x[m.supportNode[s]]);
+            }
+            mo.add(moment[s]);
+        }
+        double xa = m.x[m.supportNode[a]];
+        double xb = m.x[m.supportNode[b]];
+        // R_a + R_b = -F;  R_a xa + R_b xb = -M
+        double rb = (-mo.value() + f.value() * xa) / (xb - xa);
+        force[b] = rb;
+        force[a] = -f.value() - rb;
     }
 
     private static int[] dofs(StructureModel m, int e) {
