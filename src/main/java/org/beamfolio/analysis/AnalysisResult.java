@@ -18,6 +18,17 @@ public record AnalysisResult(Job job, StructureModel model, List<org.beamfolio.m
                              Map<String, Response> cases, List<CombinationResult> combinations,
                              Extremes envelope, List<String> droppedCombinations, String combinationSource,
                              List<Span> spans) {
+    /** Below this smallest pivot ratio the package warns that the model is badly conditioned. */
+    public static final double POOR_CONDITIONING = 1e-8;
+
+    /**
+     * The smallest ratio, over every case solved, of a pivot of the factorisation to its unknown's
+     * own stiffness: 1 is ideal; a tiny value means the model is close to a mechanism.
+     */
+    public double pivotRatio() {
+        return cases.values().stream().mapToDouble(Response::pivotRatio).min().orElse(1);
+    }
+
     /** A region between supports (or an overhang), numbered for pattern names. */
     public record Span(String label, double from, double to) {}
 }

@@ -63,7 +63,11 @@ final class BandedSolver {
         }
     }
 
-    /** Factorises in place and solves; the matrix cannot be reused. Returns the pivot ratio min/max. */
+    /**
+     * Factorises in place and solves; the matrix cannot be reused. {@code pivotRatio[0]} receives
+     * the smallest ratio of a pivot to its unknown's own diagonal stiffness, a scale-free
+     * estimate of how close the model is to singular (its reciprocal estimates the condition).
+     */
     double[] solve(double[] f, double[] pivotRatio) throws NotPositiveDefinite {
         double maxDiagonal = 0;
         for (int i = 0; i < n; i++) {
@@ -84,8 +88,7 @@ final class BandedSolver {
         for (int i = 0; i < n; i++) {
             original[i] = band[i].clone();
         }
-        double minPivot = Double.POSITIVE_INFINITY;
-        double maxPivot = 0;
+        double minPivot = 1;
         // L^T L = K with L^T upper banded, stored over the band
         for (int i = 0; i < n; i++) {
             double diagonal = band[i][0];
@@ -95,10 +98,11 @@ final class BandedSolver {
             if (!(diagonal > 1e-13 * maxDiagonal)) {
                 throw new NotPositiveDefinite(i);
             }
+            // how much of the unknown's own stiffness is left once the earlier unknowns are
+            // eliminated: near 1 for a well-posed model, tiny near a mechanism (scale-free)
+            minPivot = Math.min(minPivot, diagonal / original[i][0]);
             double pivot = Math.sqrt(diagonal);
             band[i][0] = pivot;
-            minPivot = Math.min(minPivot, diagonal);
-            maxPivot = Math.max(maxPivot, diagonal);
             for (int j = 1; j <= bandwidth && i + j < n; j++) {
                 double sum = band[i][j];
                 for (int k = 1; k <= bandwidth && i - k >= 0; k++) {
@@ -111,7 +115,7 @@ final class BandedSolver {
             }
         }
         if (pivotRatio != null && pivotRatio.length > 0) {
-            pivotRatio[0] = minPivot / maxPivot;
+            pivotRatio[0] = minPivot;
         }
         double[] hi = substitute(f);
         double[] lo = new double[n];

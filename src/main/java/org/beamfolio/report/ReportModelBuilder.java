@@ -145,7 +145,13 @@ final class ReportModelBuilder {
                 "Linear elastic analysis with small deflections; plane sections remain plane (Euler-Bernoulli beam theory); shear deformation is neglected.",
                 "Direct stiffness method, with a node at every support, hinge, load point, load end and change of section or material. Within each element EI is constant and the load linear, so shear, moment, slope and deflection are exact polynomials; the numbers come from a matrix solution of the nodal equilibrium equations, not from closed-form tables.",
                 "Extremes and their locations are found from the real roots of each polynomial's derivative, not by sampling.",
-                "Each load case is solved once; combinations and pattern arrangements are formed by superposition.");
+                "Each load case is solved once; combinations and pattern arrangements are formed by superposition.",
+                "Numerical conditioning: " + result.model().elements() + " elements, " + result.model().unknowns()
+                        + " unknowns; smallest pivot ratio " + Numbers.format(result.pivotRatio())
+                        + " (1 is ideal; below 1e-8 the model is close to a mechanism)."
+                        + (result.pivotRatio() < AnalysisResult.POOR_CONDITIONING
+                        ? " THE MODEL IS BADLY CONDITIONED: the results satisfy equilibrium to the residuals shown, but verify the supports and"
+                          + " stiffnesses; a very stiff spring or a very short span beside long ones is the usual cause." : ""));
         List<String> limitations = List.of(
                 "Sections are modelled as rectangles without fillets or rounded corners, or by closed forms; given properties are used as stated.",
                 "Supports are points; springs are linear. Support settlement is not included unless modelled by a spring.",

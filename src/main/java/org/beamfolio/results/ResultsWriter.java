@@ -38,6 +38,12 @@ public final class ResultsWriter {
         units.put("stress", u.stress().symbol());
         units.put("deflection", u.deflection().symbol());
         units.put("section", u.sectionLength().symbol());
+        ObjectNode solver = root.putObject("solver");
+        solver.put("method", "direct stiffness, exact Euler-Bernoulli elements");
+        solver.put("elements", result.model().elements());
+        solver.put("unknowns", result.model().unknowns());
+        solver.put("pivot_ratio", result.pivotRatio());
+        solver.put("poorly_conditioned", result.pivotRatio() < AnalysisResult.POOR_CONDITIONING);
         ObjectNode sections = root.putObject("sections");
         for (Map.Entry<String, SectionProperties> e : result.sections().entrySet()) {
             sections.set(e.getKey(), section(e.getValue(), u));

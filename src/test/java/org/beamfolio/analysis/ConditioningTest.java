@@ -1,0 +1,99 @@
+package org.beamfolio.analysis;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import org.beamfolio.TestJobs;
+import org.beamfolio.model.Job;
+import org.beamfolio.model.Load;
+import org.junit.jupiter.api.Test;
+
+/**
+ * Badly conditioned beams still satisfy equilibrium (statics closes the solution), and the
+ * conditioning estimate says when a model is close to singular. Invented test cases.
+ */
+class ConditioningTest {
+    static void balances(AnalysisResult r) {
+        Job job = r.job();
+        Response all = r.combinations().get(r.combinations().size() - 1).response();
+        double force = 0;
+        double moment = 0;
+        double size = 0;
+        for (Load l : job.loads()) {
+            if (l instanceof Load.Point p) {
+                force -= p.P();
+                moment -= p.P() * p.at();
+                size += Math.abs(p.P());
+            } else if (l instanceof Load.Distributed d) {
+                force -= d.resultant();
+                moment -= d.resultant() * (d.from() + d.to()) / 2;
+                size += Math.abs(d.resultant());
+            }
+        }
+        for (int i = 0; i < all.reactionForce().length; i++) {
+            force += all.reactionForce()[i];
+            moment += all.reactionForce()[i] * job.beam().supports().get(i).at() + all.reactionMoment()[i];
+            size += Math.abs(all.reactionForce()[i]);
+        }
+        assertEquals(0, force / size, 1e-12, "vertical equilibrium");
+        assertEquals(0, moment / (size * job.beam().length()), 1e-12, "moment equilibrium");
+        double m = Math.max(Math.abs(all.moment().max().value()), Math.abs(all.moment().min().value()));
+        assertEquals(0, all.moment().leftOf(job.beam().length()) / m, 1e-9, "no moment at the roller end");
+    }
+
+    @Test
+    void aVeryStiffSpringActsAsARigidSupport() {
+        String supports = "    - { at: 0 m, type: pin }\n    - { at: 3 m, type: SPRING }\n    - { at: 6 m, type: roller }\n";
+        String loads = "  - { case: D, type: uniform, w: 10 kN/m }\n";
+        AnalysisResult stiff = TestJobs.solve(TestJobs.text("6 m", supports.replace("SPRING", "spring, k: 1e12 kN/mm"), loads));
+        AnalysisResult rigid = TestJobs.solve(TestJobs.text("6 m", supports.replace("SPRING", "roller"), loads));
+        balances(stiff);
+        // two equal spans, uniform load: centre reaction 10wl/8 (AISC Manual Table 3-23)
+        assertEquals(10 * 10e3 * 3 / 8, stiff.cases().get("D").reactionForce()[1], 1e-6 * 37.5e3);
+        assertEquals(rigid.cases().get("D").reactionForce()[1], stiff.cases().get("D").reactionForce()[1], 1e-6 * 37.5e3);
+    }
+
+    @Test
+    void aVeryShortSpanBesideLongOnes() {
+        AnalysisResult r = TestJobs.solve(TestJobs.text("40.01 m", "    - { at: 0 m, type: pin }\n    - { at: 20 m, type: roller }\n"
+                + "    - { at: 20.01 m, type: roller }\n    - { at: 40.01 m, type: roller }\n",
+                "  - { case: D, type: uniform, w: 10 kN/m }\n  - { case: D, type: point, P: 50 kN, at: 7 m }\n"));
+        balances(r);
+        assertTrue(r.pivotRatio() > 0, "solved");
+    }
+
+    @Test
+    void stiffnessVaryingByAMillionBetweenSegments() {
+        String text = TestJobs.text("6 m", "    - { at: 0 m, type: fixed }\n    - { at: 6 m, type: roller }\n",
+                "  - { case: D, type: uniform, w: 10 kN/m }\n")
+                .replace("sections:\n", "sections:\n  soft: { shape: given, I: 100 mm^4, depth: 300 mm, y_bottom: 150 mm }\n")
+                .replace("loads:\n", "  segments:\n    - { from: 2 m, to: 4 m, section: soft }\nloads:\n");
+        AnalysisResult r = TestJobs.solve(text);
+        balances(r);
+    }
+
+    @Test
+    void theEstimateFlagsANearMechanism() {
+        // the part past a hinge held only by a spring a millionth as stiff as the beam
+        String text = TestJobs.text("6 m", "    - { at: 0 m, type: fixed }\n    - { at: 3 m, type: roller }\n"
+                        + "    - { at: 6 m, type: spring, k: 0.0001 kN/m }\n", "  - { case: D, type: uniform, w: 10 kN/m }\n")
+                .replace("loads:\n", "  hinges: [ 4.5 m ]\nloads:\n");
+        AnalysisResult poor = TestJobs.solve(text);
+        balances(poor);
+        assertTrue(poor.pivotRatio() < AnalysisResult.POOR_CONDITIONING, "ratio " + poor.pivotRatio());
+        AnalysisResult good = TestJobs.solve(TestJobs.text("6 m", "    - { at: 0 m, type: pin }\n    - { at: 6 m, type: roller }\n",
+                "  - { case: D, type: uniform, w: 10 kN/m }\n"));
+        assertTrue(good.pivotRatio() > 0.01, "ratio " + good.pivotRatio());
+    }
+
+    @Test
+    void aNumericallySingularModelIsRefusedWithAReason() {
+        // the same, with the spring a further million times softer: below working precision
+        String text = TestJobs.text("6 m", "    - { at: 0 m, type: fixed }\n    - { at: 3 m, type: roller }\n"
+                        + "    - { at: 6 m, type: spring, k: 1e-10 kN/m }\n", "  - { case: D, type: uniform, w: 10 kN/m }\n")
+                .replace("loads:\n", "  hinges: [ 4.5 m ]\nloads:\n");
+        UnstableBeamException e = org.junit.jupiter.api.Assertions.assertThrows(UnstableBeamException.class,
+                () -> Analysis.run(TestJobs.job(text)));
+        assertTrue(e.getMessage().contains("singular"), e.getMessage());
+    }
+}
