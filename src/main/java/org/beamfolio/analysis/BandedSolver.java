@@ -95,7 +95,7 @@ final class BandedSolver {
             for (int k = 1; k <= bandwidth && i - k >= 0; k++) {
                 diagonal -= band[i - k][k] * band[i - k][k];
             }
-            if (!(diagonal > 1e-13 * maxDiagonal)) {
+            if (!(diagonal > 1e-14 * original[i][0])) {
                 throw new NotPositiveDefinite(i);
             }
             // how much of the unknown's own stiffness is left once the earlier unknowns are
