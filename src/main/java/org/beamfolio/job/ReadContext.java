@@ -204,6 +204,10 @@ final class ReadContext {
             for (YamlNode.Entry entry : mapping.entries().values()) {
                 if (!known.contains(entry.key())) {
                     String hint = Suggest.closest(entry.key(), known).map(s -> "; did you mean \"" + s + "\"?").orElse("");
+                    if (hint.isEmpty() && entry.key().contains(" ")) {
+                        // in { a: b, c } a comma inside unquoted text starts a new key
+                        hint = "; a comma in the text before it may have split that value: put text with commas in quotes";
+                    }
                     context.error(entry.keyLocation(), path(entry.key()), "unknown key" + hint
                             + " (allowed here: " + String.join(", ", known) + ")");
                 }
