@@ -4,7 +4,10 @@ import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.List;
+import org.beamfolio.job.JobReader;
+import org.beamfolio.units.Numbers;
 import java.util.concurrent.Callable;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -20,6 +23,9 @@ final class BuildCommand implements Callable<Integer> {
 
     @Option(names = "--out", paramLabel = "DIR", description = "where to write the packages (default: the current folder)")
     Path out = Path.of(".");
+
+    @Option(names = "--csv", description = "also write DIR/<job>.csv: diagram ordinates per combination and for the envelope")
+    boolean csv;
 
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
@@ -39,13 +45,37 @@ final class BuildCommand implements Callable<Integer> {
         }
         ExitStatus status = new ExitStatus();
         Pipeline pipeline = new Pipeline();
-        for (Path file : files) {
-            Pipeline.Outcome outcome = pipeline.build(file, out);
+        boolean terminal = System.console() != null;
+        List<String[]> table = new ArrayList<>();
+        for (int i = 0; i < files.size(); i++) {
+            Path file = files.get(i);
+            if (terminal && files.size() > 1) {
+                stderr.print("\r[" + (i + 1) + "/" + files.size() + "] " + file.getFileName() + "\u001b[K");
+                stderr.flush();
+            }
+            long start = System.nanoTime();
+            Pipeline.Outcome outcome = pipeline.build(file, out, csv);
+            long millis = (System.nanoTime() - start) / 1_000_000;
+            if (terminal && files.size() > 1 && !outcome.messages().isEmpty()) {
+                stderr.print("\r\u001b[K");
+            }
             outcome.messages().forEach(stderr::print);
             if (outcome.status() == Main.OK) {
                 stdout.println("wrote " + outcome.pdf() + " and " + outcome.results());
+                table.add(new String[] {JobReader.jobName(file), Integer.toString(outcome.pages()),
+                        Double.isNaN(outcome.governingRatio()) ? "-" : Numbers.format(outcome.governingRatio()),
+                        Double.isNaN(outcome.governingRatio()) ? "no checks" : outcome.pass() ? "pass" : "FAIL", millis + " ms"});
+            } else {
+                table.add(new String[] {JobReader.jobName(file), "-", "-", outcome.status() == Main.BAD_INPUT ? "bad input" : "failed",
+                        millis + " ms"});
             }
             status.add(outcome.status());
+        }
+        if (terminal && files.size() > 1) {
+            stderr.print("\r\u001b[K");
+        }
+        if (files.size() > 1) {
+            stdout.print(ResultTable.of(List.of("job", "sheets", "governing ratio", "result", "time"), table));
         }
         stdout.flush();
         stderr.flush();

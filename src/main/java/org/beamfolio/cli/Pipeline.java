@@ -26,7 +26,24 @@ import org.beamfolio.results.ResultsWriter;
 final class Pipeline {
     private final PackageRenderer renderer = new PackageRenderer();
 
-    record Outcome(int status, List<String> messages, Path pdf, Path results) {}
+    /** What building one job gave: its files, sheets, governing check ratio (NaN without checks) and whether all pass. */
+    record Outcome(int status, List<String> messages, Path pdf, Path results, int pages, double governingRatio, boolean pass) {
+        Outcome(int status, List<String> messages) {
+            this(status, messages, null, null, 0, Double.NaN, false);
+        }
+    }
+
+    private static final java.util.regex.Pattern PAGE = java.util.regex.Pattern.compile("/Type\\s*/Page(?![s\\w])");
+
+    /** Pages of a PDF written by the renderer (its page objects are not compressed). */
+    static int pages(byte[] pdf) {
+        java.util.regex.Matcher m = PAGE.matcher(new String(pdf, StandardCharsets.ISO_8859_1));
+        int count = 0;
+        while (m.find()) {
+            count++;
+        }
+        return count;
+    }
 
     /** The job read and solved, or the messages that say why it cannot be. */
     record Solved(AnalysisResult result, List<CheckOutcome> checks, List<String> messages, int status) {}
@@ -47,24 +64,37 @@ final class Pipeline {
     }
 
     Outcome build(Path file, Path outDir) {
+        return build(file, outDir, false);
+    }
+
+    Outcome build(Path file, Path outDir, boolean csv) {
         Solved solved = solve(file);
         if (solved.status() != Main.OK) {
-            return new Outcome(solved.status(), solved.messages(), null, null);
+            return new Outcome(solved.status(), solved.messages());
         }
         String name = solved.result().job().name();
         Path pdf = outDir.resolve(name + ".pdf");
         Path results = outDir.resolve(name + ".results.json");
         List<String> messages = new ArrayList<>();
+        byte[] document;
         try {
             byte[] json = ResultsWriter.write(solved.result(), solved.checks()).getBytes(StandardCharsets.UTF_8);
-            byte[] document = renderer.render(solved.result(), solved.checks());
+            document = renderer.render(solved.result(), solved.checks());
             Files.createDirectories(outDir);
-            AtomicFiles.writeTogether(List.of(results, pdf), List.of(json, document));
+            List<Path> targets = new ArrayList<>(List.of(results, pdf));
+            List<byte[]> contents = new ArrayList<>(List.of(json, document));
+            if (csv) {
+                targets.add(outDir.resolve(name + ".csv"));
+                contents.add(org.beamfolio.results.CsvExport.write(solved.result()).getBytes(StandardCharsets.UTF_8));
+            }
+            AtomicFiles.writeTogether(targets, contents);
         } catch (IOException | RuntimeException e) {
             messages.add(file + ": internal failure while writing the package: " + e + "\n"
                     + "  nothing was written; an earlier package of the same name is unchanged\n");
-            return new Outcome(Main.INTERNAL_FAILURE, messages, null, null);
+            return new Outcome(Main.INTERNAL_FAILURE, messages);
         }
-        return new Outcome(Main.OK, messages, pdf, results);
+        double ratio = solved.checks().stream().mapToDouble(CheckOutcome::ratio).max().orElse(Double.NaN);
+        boolean pass = solved.checks().stream().allMatch(CheckOutcome::pass);
+        return new Outcome(Main.OK, messages, pdf, results, pages(document), ratio, pass);
     }
 }

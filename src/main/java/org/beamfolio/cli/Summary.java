@@ -23,17 +23,24 @@ final class Summary {
         List<String> spans = r.spans().stream().map(s -> s.label() + " " + len(s.to() - s.from(), u)).toList();
         out.append(String.join(", ", spans)).append('\n');
         out.append("  ").append(r.combinations().size()).append(" combinations from ").append(r.combinationSource()).append('\n');
-        out.append("  reactions (least and greatest over the combinations):\n");
         List<Support> supports = r.job().beam().supports();
-        for (int i = 0; i < supports.size(); i++) {
-            double lo = Double.POSITIVE_INFINITY;
-            double hi = Double.NEGATIVE_INFINITY;
-            for (CombinationResult c : r.combinations()) {
-                lo = Math.min(lo, c.response().reactionForce()[i]);
-                hi = Math.max(hi, c.response().reactionForce()[i]);
+        List<CombinationResult> plain = r.combinations().stream().filter(c -> c.arrangement().isEmpty()).toList();
+        out.append("  reactions (").append(u.force().symbol()).append(", up +) per combination:\n");
+        StringBuilder header = new StringBuilder(String.format("    %-34s", "combination"));
+        for (Support s : supports) {
+            header.append(String.format(" %12s", s.kind().label() + "@" + Numbers.format(u.length().fromSi(s.at()))));
+        }
+        out.append(header).append('\n');
+        for (int k = 0; k < Math.min(8, plain.size()); k++) {
+            CombinationResult c = plain.get(k);
+            StringBuilder line = new StringBuilder(String.format("    %-34s", c.name().length() > 34 ? c.name().substring(0, 33) + "…" : c.name()));
+            for (int i = 0; i < supports.size() && i < 6; i++) {
+                line.append(String.format(" %12s", Numbers.format(u.force().fromSi(c.response().reactionForce()[i]))));
             }
-            out.append(String.format("    %-7s at %-10s %s to %s%n", supports.get(i).kind().label(), len(supports.get(i).at(), u),
-                    Numbers.format(u.force().fromSi(lo)), Numbers.format(u.force().fromSi(hi), u.force().symbol())));
+            out.append(line).append('\n');
+        }
+        if (plain.size() > 8) {
+            out.append("    (").append(plain.size() - 8).append(" more combinations in the results file)\n");
         }
         Extremes e = r.envelope();
         if (e != null) {
@@ -48,7 +55,18 @@ final class Summary {
                     ? e.stressTopMin() : e.stressBottomMin(), u.stress(), u);
         }
         for (CheckOutcome c : checks) {
-            out.append(String.format("  %-4s %-62s ratio %s%n", c.pass() ? "ok" : "FAIL", c.id(), Numbers.format(c.ratio())));
+            out.append(String.format("  %-4s %-40s ratio %-8s %s%n", c.pass() ? "ok" : "FAIL", c.id(), Numbers.format(c.ratio()),
+                    c.combination()));
+        }
+        if (r.pivotRatio() < AnalysisResult.POOR_CONDITIONING) {
+            out.append("  warning: the model is badly conditioned (smallest pivot ratio ").append(Numbers.format(r.pivotRatio()))
+                    .append("); check very stiff springs or very short spans\n");
+        }
+        if (!r.droppedCombinations().isEmpty()) {
+            out.append("  note: ").append(r.droppedCombinations().size()).append(" combinations of the set left out (listed in the package)\n");
+        }
+        if (checks.stream().anyMatch(c -> !c.pass())) {
+            out.append("  warning: at least one check exceeds its limit\n");
         }
         return out.toString();
     }

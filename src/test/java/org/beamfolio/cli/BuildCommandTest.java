@@ -9,6 +9,7 @@ import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.List;
 import org.apache.pdfbox.Loader;
 import org.apache.pdfbox.pdmodel.PDDocument;
 import org.apache.pdfbox.pdmodel.PDPage;
@@ -115,12 +116,38 @@ class BuildCommandTest {
         Path job = writeJob("summary");
         Run run = Run.of("check", job.toString());
         assertEquals(Main.OK, run.status(), run.err());
-        assertTrue(run.out().contains("pin     at 0 m"), run.out());
+        assertTrue(run.out().contains("pin@0"), run.out());
+        assertTrue(run.out().contains("D + L"), "reactions per combination:\n" + run.out());
         assertTrue(run.out().contains("moment, sagging"), run.out());
         assertTrue(run.out().lines().count() < 40, "fits one screen");
         try (var files = Files.list(temp)) {
             assertEquals(1, files.count(), "only the job file is there");
         }
+    }
+
+    @Test
+    void csvHoldsTheDiagramOrdinatesWithUnits() throws Exception {
+        Path job = writeJob("ordinates");
+        Path out = temp.resolve("csv");
+        assertEquals(Main.OK, Run.of("build", job.toString(), "--out", out.toString(), "--csv").status());
+        List<String> lines = Files.readAllLines(out.resolve("ordinates.csv"));
+        assertEquals("combination,x (m),V (kN),M (kN*m),slope (rad),deflection (mm; down +),stress_top (MPa; tension +),"
+                + "stress_bottom (MPa; tension +)", lines.get(0));
+        assertTrue(lines.stream().anyMatch(l -> l.startsWith("envelope: largest,")));
+        // the simple span under 10 kN/m and 20 kN at 2 m: V(0) = 30 + 20 * 4 / 6 kN in D + L (statics)
+        String first = lines.stream().filter(l -> l.startsWith("D + L,0.0,")).findFirst().orElseThrow();
+        assertEquals(30 + 20.0 * 4 / 6, Double.parseDouble(first.split(",")[2]), 1e-9);
+        assertFalse(Files.exists(temp.resolve("a-job-without-csv.csv")));
+    }
+
+    @Test
+    void aFolderBuildEndsWithATable() throws Exception {
+        writeJob("one");
+        writeJob("two");
+        Run run = Run.of("build", temp.toString(), "--out", temp.resolve("t").toString());
+        assertEquals(Main.OK, run.status(), run.err());
+        assertTrue(run.out().contains("job  sheets  governing ratio  result  time"), run.out());
+        assertTrue(run.out().lines().anyMatch(l -> l.startsWith("one ") && l.contains("pass")), run.out());
     }
 
     @Test
