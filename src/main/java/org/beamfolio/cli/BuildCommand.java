@@ -27,6 +27,10 @@ final class BuildCommand implements Callable<Integer> {
     @Option(names = "--csv", description = "also write DIR/<job>.csv: diagram ordinates per combination and for the envelope")
     boolean csv;
 
+    @Option(names = "--previous", paramLabel = "OLD.yaml",
+            description = "the previous revision of the job: the package gets a sheet of what changed (one job only)")
+    Path previous;
+
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
 
@@ -43,6 +47,10 @@ final class BuildCommand implements Callable<Integer> {
             stderr.println("beamfolio: --out " + out + " is a file, not a folder");
             return Main.BAD_INPUT;
         }
+        if (previous != null && files.size() != 1) {
+            stderr.println("beamfolio: --previous compares one job with its previous revision; give exactly one job");
+            return Main.BAD_INPUT;
+        }
         ExitStatus status = new ExitStatus();
         Pipeline pipeline = new Pipeline();
         boolean terminal = System.console() != null;
@@ -54,7 +62,7 @@ final class BuildCommand implements Callable<Integer> {
                 stderr.flush();
             }
             long start = System.nanoTime();
-            Pipeline.Outcome outcome = pipeline.build(file, out, csv);
+            Pipeline.Outcome outcome = pipeline.build(file, out, csv, previous);
             long millis = (System.nanoTime() - start) / 1_000_000;
             if (terminal && files.size() > 1 && !outcome.messages().isEmpty()) {
                 stderr.print("\r\u001b[K");

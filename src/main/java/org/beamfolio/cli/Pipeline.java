@@ -68,9 +68,23 @@ final class Pipeline {
     }
 
     Outcome build(Path file, Path outDir, boolean csv) {
+        return build(file, outDir, csv, null);
+    }
+
+    /** With {@code previous}, the package compares this job with that earlier revision of it. */
+    Outcome build(Path file, Path outDir, boolean csv, Path previous) {
         Solved solved = solve(file);
         if (solved.status() != Main.OK) {
             return new Outcome(solved.status(), solved.messages());
+        }
+        Solved before = null;
+        if (previous != null) {
+            before = solve(previous);
+            if (before.status() != Main.OK) {
+                List<String> messages = new ArrayList<>(before.messages());
+                messages.add(previous + ": the previous revision (--previous) must itself be a valid job; nothing was written\n");
+                return new Outcome(before.status(), messages);
+            }
         }
         String name = solved.result().job().name();
         Path pdf = outDir.resolve(name + ".pdf");
@@ -79,7 +93,8 @@ final class Pipeline {
         byte[] document;
         try {
             byte[] json = ResultsWriter.write(solved.result(), solved.checks()).getBytes(StandardCharsets.UTF_8);
-            document = renderer.render(solved.result(), solved.checks());
+            document = before == null ? renderer.render(solved.result(), solved.checks())
+                    : renderer.render(solved.result(), solved.checks(), before.result(), before.checks());
             Files.createDirectories(outDir);
             List<Path> targets = new ArrayList<>(List.of(results, pdf));
             List<byte[]> contents = new ArrayList<>(List.of(json, document));

@@ -58,7 +58,12 @@ public final class PackageRenderer {
     }
 
     public byte[] render(AnalysisResult result, List<CheckOutcome> checks) {
-        ReportModelBuilder.Built built = new ReportModelBuilder(result).build(checks);
+        return render(result, checks, null, List.of());
+    }
+
+    /** The package, with a revision-delta sheet when a previous revision's results are given. */
+    public byte[] render(AnalysisResult result, List<CheckOutcome> checks, AnalysisResult previous, List<CheckOutcome> previousChecks) {
+        ReportModelBuilder.Built built = new ReportModelBuilder(result).build(checks, previous, previousChecks);
         String xhtml = xhtml(built.model());
         PdfRenderer.Attachment job = new PdfRenderer.Attachment(result.job().name() + ".yaml",
                 result.job().sourceBytes(), "Job file of this calculation package");

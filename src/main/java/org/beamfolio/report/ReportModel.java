@@ -7,7 +7,7 @@ import java.util.List;
  * (by {@link Numbers}) and labelled with its unit; figures by the id of their drawing. Built by
  * {@link ReportModelBuilder}; read by the templates in report-templates/ as {@code r}.
  */
-public record ReportModel(Sheet sheet, Cover cover, Basis basis, Loading loading, List<CombinationSheet> analyses,
+public record ReportModel(Sheet sheet, Cover cover, Revision revision, Basis basis, Loading loading, List<CombinationSheet> analyses,
                           Envelope envelope, Stresses stresses, Checks checks, List<String> cautions,
                           List<String> reviewChecklist, List<List<String>> history, Appendix appendix) {
 
@@ -48,6 +48,9 @@ public record ReportModel(Sheet sheet, Cover cover, Basis basis, Loading loading
     public record Stresses(List<SectionSheet> sections, List<Equation> equations) {}
 
     public record Checks(Table table, String governing, boolean allPass, boolean any) {}
+
+    /** What changed since the previous revision; null without {@code --previous}. */
+    public record Revision(String revisions, Table inputs, Table results, Table checks) {}
 
     public record Appendix(List<Row> lines, String digest, String toolVersion, String attachment) {}
 }

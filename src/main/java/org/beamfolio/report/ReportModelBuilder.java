@@ -39,6 +39,11 @@ final class ReportModelBuilder {
     }
 
     Built build(List<CheckOutcome> checks) {
+        return build(checks, null, List.of());
+    }
+
+    /** With a previous revision of the job (or null), the package gets a revision-delta sheet. */
+    Built build(List<CheckOutcome> checks, AnalysisResult previous, List<CheckOutcome> previousChecks) {
         Job job = result.job();
         Project p = job.project();
         ReportModel.Sheet sheet = new ReportModel.Sheet(p.title(), p.number(), p.subject(), p.revision(), p.preparedBy(),
@@ -49,7 +54,9 @@ final class ReportModelBuilder {
         List<ReportModel.CombinationSheet> analyses = new CombinationPart(result, t, drawings).sheets(governing(checks));
         ReportModel.Envelope envelope = new CombinationPart(result, t, drawings).envelope();
         ReportModel.Stresses stresses = new StressPart(result, t).build();
-        ReportModel model = new ReportModel(sheet, cover(checks, analyses), basis(), loading.build(), analyses, envelope,
+        ReportModel.Revision revision = previous == null ? null
+                : new RevisionPart(result, checks, previous, previousChecks, t).build();
+        ReportModel model = new ReportModel(sheet, cover(checks, analyses, revision != null), revision, basis(), loading.build(), analyses, envelope,
                 stresses, checks(checks), cautions(), reviewChecklist(), history(), appendix());
         return new Built(model, drawings);
     }
@@ -83,7 +90,7 @@ final class ReportModelBuilder {
         return out;
     }
 
-    private ReportModel.Cover cover(List<CheckOutcome> checks, List<ReportModel.CombinationSheet> analyses) {
+    private ReportModel.Cover cover(List<CheckOutcome> checks, List<ReportModel.CombinationSheet> analyses, boolean revision) {
         Job job = result.job();
         long spans = result.spans().stream().filter(s -> s.label().startsWith("span ")).count();
         String layout = result.spans().stream().anyMatch(s -> s.label().contains("cantilever")) ? "cantilever"
@@ -94,6 +101,9 @@ final class ReportModelBuilder {
                 + result.combinations().size() + " load combinations and arrangements, with "
                 + (checks.isEmpty() ? "no limit checks requested." : checks.size() + " checks against the stated limits.");
         List<ReportModel.Row> contents = new ArrayList<>();
+        if (revision) {
+            contents.add(new ReportModel.Row("Changes since the previous revision", "revision"));
+        }
         contents.add(new ReportModel.Row("Design basis", "basis"));
         contents.add(new ReportModel.Row("Loading", "loading"));
         for (ReportModel.CombinationSheet s : analyses) {
