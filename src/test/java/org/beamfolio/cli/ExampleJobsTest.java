@@ -41,6 +41,25 @@ class ExampleJobsTest {
     }
 
     @Test
+    void readmeListsEveryExampleAndNothingElse() throws IOException {
+        String readme = Files.readString(Path.of("README.md"));
+        java.util.Set<String> listed = new java.util.TreeSet<>();
+        Matcher m = Pattern.compile("\\| `([\\w-]+\\.yaml)` \\|").matcher(readme);
+        while (m.find()) {
+            listed.add(m.group(1));
+        }
+        java.util.Set<String> present = new java.util.TreeSet<>(examples().map(p -> p.getFileName().toString()).toList());
+        assertEquals(present, listed);
+    }
+
+    @Test
+    void readmeNewCommandWorksAsWritten() {
+        Path starter = temp.resolve("starter.yaml");
+        assertEquals(Main.OK, Run.of("new", "continuous", "--units", "SI", "--out", starter.toString()).status());
+        assertEquals(Main.OK, Run.of("check", starter.toString()).status());
+    }
+
+    @Test
     void readmeQuickStartBuildsAnExistingJob() throws IOException {
         String readme = Files.readString(Path.of("README.md"));
         Matcher m = Pattern.compile("build (example-jobs/[\\w.-]+\\.yaml)").matcher(readme);
