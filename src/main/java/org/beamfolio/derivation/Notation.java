@@ -54,6 +54,6 @@ final class Notation {
     }
 
     static String sym(Unit u) {
-        return u.symbol().replace("*", "·");
+        return u.symbol().replace("*", "·").replace("^2", "²").replace("^3", "³").replace("^4", "⁴");
     }
 }

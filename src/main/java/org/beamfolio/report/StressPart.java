@@ -5,13 +5,8 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import org.beamfolio.analysis.AnalysisResult;
-import org.beamfolio.analysis.CombinationResult;
-import org.beamfolio.analysis.Extreme;
-import org.beamfolio.analysis.Extremes;
 import org.beamfolio.model.Section;
 import org.beamfolio.section.SectionProperties;
-import org.beamfolio.units.Unit;
-import org.beamfolio.units.Units;
 
 /**
  * Section properties (with the parallel axis table for sections built of rectangles) and the
@@ -21,12 +16,10 @@ import org.beamfolio.units.Units;
 final class StressPart {
     private final AnalysisResult result;
     private final Texts t;
-    private final boolean us;
 
     StressPart(AnalysisResult result, Texts t) {
         this.result = result;
         this.t = t;
-        this.us = t.units().length().symbol().equals("ft");
     }
 
     ReportModel.Table summaryTable() {
@@ -104,72 +97,9 @@ final class StressPart {
 
     private List<ReportModel.Equation> equations() {
         List<ReportModel.Equation> out = new ArrayList<>();
-        Extremes e = result.envelope();
-        if (e == null) {
-            return out;
-        }
-        boolean topTension = e.stressTopMax().value() > e.stressBottomMax().value();
-        Extreme tension = topTension ? e.stressTopMax() : e.stressBottomMax();
-        boolean topCompression = e.stressTopMin().value() < e.stressBottomMin().value();
-        Extreme compression = topCompression ? e.stressTopMin() : e.stressBottomMin();
-        if (tension.value() > 0) {
-            out.add(fibre("Largest tension", tension, topTension));
-        }
-        if (compression.value() < 0) {
-            out.add(fibre("Largest compression", compression, topCompression));
-        }
-        if (e.shearStressMax() != null && e.shearStressMax().value() > 0) {
-            out.add(shear(e.shearStressMax()));
+        for (org.beamfolio.derivation.Step step : org.beamfolio.derivation.StressSteps.of(result)) {
+            out.add(new ReportModel.Equation(step.statement(), step.symbolic(), step.substituted(), step.result(), step.source()));
         }
         return out;
-    }
-
-    private CombinationResult combination(String name) {
-        return result.combinations().stream().filter(c -> c.name().equals(name)).findFirst().orElseThrow();
-    }
-
-    private ReportModel.Equation fibre(String what, Extreme stress, boolean top) {
-        CombinationResult c = combination(stress.combination());
-        double x = stress.at();
-        int element = result.model().elementAt(x);
-        var field = c.response().moment();
-        double m = field.piece(element).at(x - field.start(element));
-        SectionProperties s = result.model().section(element);
-        double cFibre = top ? s.cTop() : s.cBottom();
-        Unit small = t.units().sectionLength();
-        String momentInSmall = us ? "(" + t.moment(m) + " × 12 in/ft)" : "(" + t.moment(m) + " × 10⁶ N·mm per kN·m)";
-        double sigma = (top ? -1 : 1) * m * cFibre / s.inertia();
-        String fibre = top ? "top" : "bottom";
-        String sense = m >= 0 ? "sagging" : "hogging";
-        return new ReportModel.Equation(what + ": " + fibre + " fibre at x = " + t.len(x) + " under " + c.name() + ", " + sense
-                + " moment, section " + result.model().sectionId(element),
-                "σ = " + (top ? "−" : "") + "M·c_" + fibre + " / I",
-                "σ = " + (top ? "−" : "") + momentInSmall + " × " + t.q(cFibre, small) + " / " + t.q(s.inertia(), t.units().secondMoment()),
-                t.stress(sigma), "flexure formula, elementary beam theory (plane sections)");
-    }
-
-    private ReportModel.Equation shear(Extreme tau) {
-        CombinationResult c = combination(tau.combination());
-        double x = tau.at();
-        int element = result.model().elementAt(x);
-        var field = c.response().shear();
-        double v = field.piece(element).at(x - field.start(element));
-        SectionProperties s = result.model().section(element);
-        double q = s.qNeutral();
-        double width = s.tNeutral();
-        String where = "the neutral axis";
-        for (SectionProperties.Junction j : s.junctions()) {
-            if (Math.abs(j.q()) / j.width() > q / width) {
-                q = Math.abs(j.q());
-                width = j.width();
-                where = "the junction " + t.q(j.height(), t.units().sectionLength()) + " above the bottom";
-            }
-        }
-        Unit force = us ? Units.of("lb") : Units.of("N");
-        return new ReportModel.Equation("Largest shear stress: at " + where + ", x = " + t.len(x) + " under " + c.name(),
-                "τ = V·Q / (I·t)",
-                "τ = " + t.q(Math.abs(v), force) + " × " + t.q(q, t.units().firstMoment()) + " / (" + t.q(s.inertia(), t.units().secondMoment())
-                        + " × " + t.q(width, t.units().sectionLength()) + ")",
-                t.stress(Math.abs(v) * q / (s.inertia() * width)), "shear formula, elementary beam theory");
     }
 }
