@@ -56,6 +56,31 @@ public final class TestJobs {
         }
     }
 
+    /**
+     * The out-of-balance of a response against the job's loads (statics): the sum of vertical
+     * forces and of moments about x = 0, each divided by the size of what was summed (the loads'
+     * and reactions' magnitudes, and those times the beam length), so the residuals are relative.
+     */
+    public static double[] relativeResiduals(org.beamfolio.model.Job job, Response r) {
+        double force = 0;
+        double moment = 0;
+        double size = 0;
+        for (org.beamfolio.model.Load l : job.loads()) {
+            force -= l.force();
+            moment += -l.force() * l.centroid() + l.couple();
+            size += Math.abs(l.force()) + Math.abs(l.couple()) / job.beam().length();
+            if (l instanceof org.beamfolio.model.Load.Distributed d) {
+                size += Math.abs(d.wEnd() - d.wStart()) * (d.to() - d.from());
+            }
+        }
+        for (int i = 0; i < job.beam().supports().size(); i++) {
+            force += r.reactionForce()[i];
+            moment += r.reactionForce()[i] * job.beam().supports().get(i).at() + r.reactionMoment()[i];
+            size += Math.abs(r.reactionForce()[i]);
+        }
+        return new double[] {force / size, moment / (size * job.beam().length())};
+    }
+
     /** The response to load case D of a job. */
     public static Response caseD(String text) {
         return solve(text).cases().get("D");

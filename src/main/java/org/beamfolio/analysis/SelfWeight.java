@@ -28,14 +28,8 @@ final class SelfWeight {
         for (double cut : cuts) {
             if (previous != null && cut > previous) {
                 double mid = 0.5 * (previous + cut);
-                String section = beam.section();
-                String material = beam.material();
-                for (Segment s : beam.segments()) {
-                    if (mid > s.from() && mid < s.to()) {
-                        section = s.section();
-                        material = s.material();
-                    }
-                }
+                String section = beam.sectionAt(mid);
+                String material = beam.materialAt(mid);
                 double w = materials.get(material).weightDensity() * sections.get(section).area();
                 result.add(new Load.Distributed(beam.selfWeightCase(), w, w, previous, cut, true,
                         "self weight (" + material + ", " + section + ")", null));

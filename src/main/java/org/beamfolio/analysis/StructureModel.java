@@ -112,14 +112,7 @@ public final class StructureModel {
             points.add(s.to());
         }
         for (Load load : loads) {
-            if (load instanceof Load.Point p) {
-                points.add(p.at());
-            } else if (load instanceof Load.Couple c) {
-                points.add(c.at());
-            } else if (load instanceof Load.Distributed d) {
-                points.add(d.from());
-                points.add(d.to());
-            }
+            points.addAll(load.positions());
         }
         List<Double> merged = new ArrayList<>();
         for (double p : points) {
@@ -152,14 +145,8 @@ public final class StructureModel {
         String[] materialIds = new String[elements];
         for (int e = 0; e < elements; e++) {
             double mid = 0.5 * (x[e] + x[e + 1]);
-            String section = beam.section();
-            String material = beam.material();
-            for (Segment s : beam.segments()) {
-                if (mid > s.from() && mid < s.to()) {
-                    section = s.section();
-                    material = s.material();
-                }
-            }
+            String section = beam.sectionAt(mid);
+            String material = beam.materialAt(mid);
             sectionIds[e] = section;
             materialIds[e] = material;
             sections[e] = properties.get(section);

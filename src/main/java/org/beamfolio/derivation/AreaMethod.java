@@ -38,12 +38,7 @@ final class AreaMethod {
         result.job().beam().supports().forEach(s -> xs.add(s.at()));
         result.job().beam().hinges().forEach(h -> xs.add(h.at()));
         for (Load l : loads) {
-            if (l instanceof Load.Distributed d) {
-                xs.add(d.from());
-                xs.add(d.to());
-            } else {
-                xs.add(FactoredLoads.position(l));
-            }
+            xs.addAll(l.positions());
         }
         xs.addAll(zeroShear());
         points = new ArrayList<>(xs);

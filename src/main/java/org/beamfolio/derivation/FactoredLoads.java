@@ -28,49 +28,21 @@ public final class FactoredLoads {
                 ofCase = loaded;
             }
             for (Load l : ofCase) {
-                out.add(scaled(l, f.getValue()));
+                out.add(l.scaled(f.getValue()));
             }
         }
         return out;
     }
 
-    static Load scaled(Load l, double k) {
-        if (l instanceof Load.Point p) {
-            return new Load.Point(p.loadCase(), k * p.P(), p.at(), p.note(), p.where());
-        }
-        if (l instanceof Load.Couple c) {
-            return new Load.Couple(c.loadCase(), k * c.M(), c.at(), c.note(), c.where());
-        }
-        Load.Distributed d = (Load.Distributed) l;
-        return new Load.Distributed(d.loadCase(), k * d.wStart(), k * d.wEnd(), d.from(), d.to(), d.uniform(), d.note(), d.where());
-    }
-
-    /** Resultant force (down +) of a load. */
     static double force(Load l) {
-        if (l instanceof Load.Point p) {
-            return p.P();
-        }
-        if (l instanceof Load.Distributed d) {
-            return d.resultant();
-        }
-        return 0;
+        return l.force();
     }
 
-    /** Where the resultant acts (the centroid of a line load's diagram). */
     static double position(Load l) {
-        if (l instanceof Load.Point p) {
-            return p.at();
-        }
-        if (l instanceof Load.Couple c) {
-            return c.at();
-        }
-        Load.Distributed d = (Load.Distributed) l;
-        double sum = d.wStart() + d.wEnd();
-        return sum == 0 ? (d.from() + d.to()) / 2 : d.from() + (d.to() - d.from()) * (d.wStart() + 2 * d.wEnd()) / (3 * sum);
+        return l.centroid();
     }
 
-    /** Counter-clockwise couple of a load (zero for forces). */
     static double couple(Load l) {
-        return l instanceof Load.Couple c ? c.M() : 0;
+        return l.couple();
     }
 }

@@ -13,4 +13,26 @@ public record Beam(double length, String section, String material, List<Support>
         hinges = List.copyOf(hinges);
         segments = List.copyOf(segments);
     }
+
+    /** The section at x, strictly inside a stretch without change (the last segment naming x wins). */
+    public String sectionAt(double x) {
+        String id = section;
+        for (Segment s : segments) {
+            if (x > s.from() && x < s.to()) {
+                id = s.section();
+            }
+        }
+        return id;
+    }
+
+    /** The material at x, as {@link #sectionAt}. */
+    public String materialAt(double x) {
+        String id = material;
+        for (Segment s : segments) {
+            if (x > s.from() && x < s.to()) {
+                id = s.material();
+            }
+        }
+        return id;
+    }
 }

@@ -13,10 +13,64 @@ public sealed interface Load {
 
     Location where();
 
-    record Point(String loadCase, double P, double at, String note, Location where) implements Load {}
+    /** The resultant force, down positive (zero for a couple). */
+    double force();
+
+    /** Where the resultant acts: the point, or the centroid of a line load's diagram. */
+    double centroid();
+
+    /** The counter-clockwise couple (zero for a force). */
+    default double couple() {
+        return 0;
+    }
+
+    /** The positions that bound the load: its point, or its start and end. */
+    java.util.List<Double> positions();
+
+    /** The same load times a factor. */
+    Load scaled(double factor);
+
+    record Point(String loadCase, double P, double at, String note, Location where) implements Load {
+        public double force() {
+            return P;
+        }
+
+        public double centroid() {
+            return at;
+        }
+
+        public java.util.List<Double> positions() {
+            return java.util.List.of(at);
+        }
+
+        public Load scaled(double factor) {
+            return new Point(loadCase, factor * P, at, note, where);
+        }
+    }
 
     /** A concentrated couple, counter-clockwise positive. */
-    record Couple(String loadCase, double M, double at, String note, Location where) implements Load {}
+    record Couple(String loadCase, double M, double at, String note, Location where) implements Load {
+        public double force() {
+            return 0;
+        }
+
+        public double centroid() {
+            return at;
+        }
+
+        @Override
+        public double couple() {
+            return M;
+        }
+
+        public java.util.List<Double> positions() {
+            return java.util.List.of(at);
+        }
+
+        public Load scaled(double factor) {
+            return new Couple(loadCase, factor * M, at, note, where);
+        }
+    }
 
     /** A line load varying linearly from wStart at {@code from} to wEnd at {@code to}. */
     record Distributed(String loadCase, double wStart, double wEnd, double from, double to, boolean uniform,
@@ -34,6 +88,24 @@ public sealed interface Load {
 
         public double resultant() {
             return 0.5 * (wStart + wEnd) * (to - from);
+        }
+
+        public double force() {
+            return resultant();
+        }
+
+        /** The centroid of the trapezoid (its middle when the intensities cancel). */
+        public double centroid() {
+            double sum = wStart + wEnd;
+            return sum == 0 ? (from + to) / 2 : from + (to - from) * (wStart + 2 * wEnd) / (3 * sum);
+        }
+
+        public java.util.List<Double> positions() {
+            return java.util.List.of(from, to);
+        }
+
+        public Load scaled(double factor) {
+            return new Distributed(loadCase, factor * wStart, factor * wEnd, from, to, uniform, note, where);
         }
     }
 }

@@ -90,23 +90,10 @@ final class CombinationPart {
         Map<String, double[]> totals = new java.util.LinkedHashMap<>();
         for (Load load : FactoredLoads.of(result, c)) {
             double[] t = totals.computeIfAbsent(load.loadCase(), k -> new double[2]);
-            double f = load instanceof Load.Point p ? p.P() : load instanceof Load.Distributed d ? d.resultant() : 0;
-            t[0] += f;
-            t[1] += -f * position(load) + (load instanceof Load.Couple cp ? cp.M() : 0);
+            t[0] += load.force();
+            t[1] += -load.force() * load.centroid() + load.couple();
         }
         return totals;
-    }
-
-    private static double position(Load load) {
-        if (load instanceof Load.Point p) {
-            return p.at();
-        }
-        if (load instanceof Load.Couple c) {
-            return c.at();
-        }
-        Load.Distributed d = (Load.Distributed) load;
-        double sum = d.wStart() + d.wEnd();
-        return sum == 0 ? (d.from() + d.to()) / 2 : d.from() + (d.to() - d.from()) * (d.wStart() + 2 * d.wEnd()) / (3 * sum);
     }
 
     /**
@@ -194,14 +181,7 @@ final class CombinationPart {
         result.job().beam().supports().forEach(s -> xs.add(s.at()));
         result.job().beam().hinges().forEach(h -> xs.add(h.at()));
         for (Load load : result.job().loads()) {
-            if (load instanceof Load.Point p) {
-                xs.add(p.at());
-            } else if (load instanceof Load.Couple c) {
-                xs.add(c.at());
-            } else if (load instanceof Load.Distributed d) {
-                xs.add(d.from());
-                xs.add(d.to());
-            }
+            xs.addAll(load.positions());
         }
         Field v = r.shear();
         TreeSet<Double> zeroShear = new TreeSet<>();
