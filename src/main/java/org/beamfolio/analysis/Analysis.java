@@ -87,7 +87,7 @@ public final class Analysis {
         for (Map.Entry<String, Double> f : factors.entrySet()) {
             Response r = cases.get(f.getKey());
             if (r != null && f.getValue() != 0) {
-                sum = sum.plus(r.times(f.getValue(), name), name);
+                sum = sum.plusTimes(r, f.getValue(), name);
             }
         }
         return sum;
@@ -130,7 +130,7 @@ public final class Analysis {
                     double factor = combination.factors().getOrDefault(p, 0.0);
                     for (int i = 0; i < loaded.length; i++) {
                         if (loaded[i] && factor != 0) {
-                            r = r.plus(shares.get(p)[i].times(factor, name), name);
+                            r = r.plusTimes(shares.get(p)[i], factor, name);
                         }
                     }
                 }

@@ -1,27 +1,45 @@
 package org.beamfolio.analysis;
 
-import java.util.ArrayList;
 import java.util.List;
-import java.util.function.UnaryOperator;
 
 /**
  * A field along the beam (shear, moment, slope, deflection, a stress) as polynomial pieces, one
  * per element, each in the local coordinate s = x - start. Jumps between pieces are kept: the
- * value just left and just right of a node are both available.
+ * value just left and just right of a node are both available. The coefficients are stored flat,
+ * six to a piece (beam fields are of degree five or less), so that sums and multiples of fields,
+ * made for every combination, cost array loops and no objects.
  */
 public final class Field {
+    /** Coefficients per piece: degree five at most. */
+    static final int STRIDE = 6;
+
     private final double[] starts;
     private final double[] ends;
-    private final Polynomial[] pieces;
+    private final double[] c;
 
     public Field(double[] starts, double[] ends, Polynomial[] pieces) {
         this.starts = starts.clone();
         this.ends = ends.clone();
-        this.pieces = pieces.clone();
+        this.c = new double[pieces.length * STRIDE];
+        for (int i = 0; i < pieces.length; i++) {
+            if (pieces[i].degree() >= STRIDE) {
+                throw new IllegalArgumentException("a beam field is of degree five or less, got " + pieces[i].degree());
+            }
+            for (int k = 0; k <= pieces[i].degree(); k++) {
+                c[i * STRIDE + k] = pieces[i].coefficient(k);
+            }
+        }
+    }
+
+    /** Shares the abscissae of another field: they never change. */
+    private Field(double[] starts, double[] ends, double[] coefficients) {
+        this.starts = starts;
+        this.ends = ends;
+        this.c = coefficients;
     }
 
     public int size() {
-        return pieces.length;
+        return starts.length;
     }
 
     public double start(int i) {
@@ -33,23 +51,36 @@ public final class Field {
     }
 
     public Polynomial piece(int i) {
-        return pieces[i];
+        double[] k = new double[STRIDE];
+        System.arraycopy(c, i * STRIDE, k, 0, STRIDE);
+        return Polynomial.of(k);
+    }
+
+    /** Piece i at local s, by Horner's rule on the flat coefficients. */
+    double value(int i, double s) {
+        int base = i * STRIDE;
+        double v = 0;
+        for (int k = STRIDE - 1; k >= 0; k--) {
+            v = v * s + c[base + k];
+        }
+        return v;
     }
 
     /** Value at x; at a node, the value of the piece to the right (the left at the beam's end). */
     public double at(double x) {
-        return pieces[indexRightOf(x)].at(x - starts[indexRightOf(x)]);
+        int i = indexRightOf(x);
+        return value(i, x - starts[i]);
     }
 
     /** Value just left of x (the first piece's start value at the beam's left end). */
     public double leftOf(double x) {
         int i = indexLeftOf(x);
-        return pieces[i].at(x - starts[i]);
+        return value(i, x - starts[i]);
     }
 
     int indexRightOf(double x) {
         int lo = 0;
-        int hi = pieces.length - 1;
+        int hi = starts.length - 1;
         while (lo < hi) {
             int mid = (lo + hi + 1) >>> 1;
             if (starts[mid] <= x) {
@@ -67,38 +98,41 @@ public final class Field {
     }
 
     public Field plus(Field o) {
-        Polynomial[] r = new Polynomial[pieces.length];
+        double[] r = new double[c.length];
         for (int i = 0; i < r.length; i++) {
-            r[i] = pieces[i].plus(o.pieces[i]);
+            r[i] = c[i] + o.c[i];
         }
         return new Field(starts, ends, r);
     }
 
     public Field times(double k) {
-        return map(p -> p.times(k));
-    }
-
-    /** The same pieces, each scaled by its own factor (a stress from a moment, segment by segment). */
-    public Field scaledBy(double[] factors) {
-        Polynomial[] r = new Polynomial[pieces.length];
+        double[] r = new double[c.length];
         for (int i = 0; i < r.length; i++) {
-            r[i] = pieces[i].times(factors[i]);
+            r[i] = c[i] * k;
         }
         return new Field(starts, ends, r);
     }
 
-    public Field map(UnaryOperator<Polynomial> f) {
-        Polynomial[] r = new Polynomial[pieces.length];
+    /** this + k * other, in one pass. */
+    public Field plusTimes(Field other, double k) {
+        double[] r = new double[c.length];
         for (int i = 0; i < r.length; i++) {
-            r[i] = f.apply(pieces[i]);
+            r[i] = c[i] + k * other.c[i];
+        }
+        return new Field(starts, ends, r);
+    }
+
+    /** The same pieces, each scaled by its own factor (a stress from a moment, segment by segment). */
+    public Field scaledBy(double[] factors) {
+        double[] r = new double[c.length];
+        for (int i = 0; i < r.length; i++) {
+            r[i] = c[i] * factors[i / STRIDE];
         }
         return new Field(starts, ends, r);
     }
 
     public static Field zero(double[] starts, double[] ends) {
-        Polynomial[] r = new Polynomial[starts.length];
-        java.util.Arrays.fill(r, Polynomial.ZERO);
-        return new Field(starts, ends, r);
+        return new Field(starts.clone(), ends.clone(), new double[starts.length * STRIDE]);
     }
 
     /**
@@ -106,63 +140,89 @@ public final class Field {
      * roots of its derivative) are the candidates, so the result is exact, not sampled.
      */
     public Extreme max() {
-        return extreme(1);
+        return extremes(null, this, this::candidates)[0];
     }
 
     public Extreme min() {
-        return extreme(-1);
+        return extremes(null, this, this::candidates)[1];
     }
 
     /** The largest absolute value, its sign kept. */
     public Extreme maxAbs() {
-        Extreme hi = max();
-        Extreme lo = min();
-        return Math.abs(lo.value()) > Math.abs(hi.value()) ? lo : hi;
+        Extreme[] range = extremes(null, this, this::candidates);
+        return Math.abs(range[1].value()) > Math.abs(range[0].value()) ? range[1] : range[0];
+    }
+
+    /** Where a piece can take its extremes: its two ends and the real roots of its derivative (local s). */
+    public double[] candidates(int piece) {
+        double length = ends[piece] - starts[piece];
+        int base = piece * STRIDE;
+        double[] d = new double[STRIDE - 1];
+        boolean constant = true;
+        for (int k = 1; k < STRIDE; k++) {
+            d[k - 1] = k * c[base + k];
+            constant &= d[k - 1] == 0;
+        }
+        if (constant) {
+            return new double[] {0, length};
+        }
+        List<Double> roots = Roots.in(Polynomial.of(d), 0, length);
+        double[] out = new double[roots.size() + 2];
+        out[0] = 0;
+        out[1] = length;
+        for (int i = 0; i < roots.size(); i++) {
+            out[i + 2] = roots.get(i);
+        }
+        return out;
+    }
+
+    /**
+     * The largest and smallest of {@code shape} scaled piece by piece ({@code factors}, or 1),
+     * evaluated at the given candidate points of each piece: exact when the candidates are those
+     * of {@code shape} (a stress is a scaled moment, and shares the moment's candidates). Values
+     * within 1e-10 of the largest magnitude are the round-off of a zero and are reported as zero.
+     */
+    public Extreme[] extremes(double[] factors, Field shape, java.util.function.IntFunction<double[]> candidates) {
+        double bestMax = Double.NEGATIVE_INFINITY;
+        double bestMin = Double.POSITIVE_INFINITY;
+        double atMax = starts[0];
+        double atMin = starts[0];
+        double scale = 0;
+        for (int i = 0; i < starts.length; i++) {
+            double k = factors == null ? 1 : factors[i];
+            for (double sLocal : candidates.apply(i)) {
+                double v = k * shape.value(i, sLocal);
+                scale = Math.max(scale, Math.abs(v));
+                if (v > bestMax) {
+                    bestMax = v;
+                    atMax = starts[i] + sLocal;
+                }
+                if (v < bestMin) {
+                    bestMin = v;
+                    atMin = starts[i] + sLocal;
+                }
+            }
+        }
+        if (Math.abs(bestMax) <= 1e-10 * scale) {
+            bestMax = 0.0;
+        }
+        if (Math.abs(bestMin) <= 1e-10 * scale) {
+            bestMin = 0.0;
+        }
+        return new Extreme[] {new Extreme(bestMax, atMax, null), new Extreme(bestMin, atMin, null)};
     }
 
     /** The largest (sign 1) or smallest (sign -1) value on one piece, exact as {@link #max()}. */
     public Extreme extremeOf(int piece, int sign) {
-        double length = ends[piece] - starts[piece];
-        List<Double> candidates = new ArrayList<>();
-        candidates.add(0.0);
-        candidates.add(length);
-        candidates.addAll(Roots.in(pieces[piece].derivative(), 0, length));
         double best = Double.NEGATIVE_INFINITY;
         double at = starts[piece];
-        for (double s : candidates) {
-            double v = pieces[piece].at(s);
+        for (double s : candidates(piece)) {
+            double v = value(piece, s);
             if (sign * v > best) {
                 best = sign * v;
                 at = starts[piece] + s;
             }
         }
         return new Extreme(sign * best, at, null);
-    }
-
-    private Extreme extreme(int sign) {
-        double bestValue = Double.NEGATIVE_INFINITY;
-        double bestAt = starts[0];
-        double scale = 0;
-        for (int i = 0; i < pieces.length; i++) {
-            double length = ends[i] - starts[i];
-            List<Double> candidates = new ArrayList<>();
-            candidates.add(0.0);
-            candidates.add(length);
-            candidates.addAll(Roots.in(pieces[i].derivative(), 0, length));
-            for (double s : candidates) {
-                double v = pieces[i].at(s);
-                scale = Math.max(scale, Math.abs(v));
-                if (sign * v > bestValue) {
-                    bestValue = sign * v;
-                    bestAt = starts[i] + s;
-                }
-            }
-        }
-        double value = sign * bestValue;
-        // round-off left by the solution (a moment of 1e-12 at a free end) is reported as zero
-        if (Math.abs(value) <= 1e-10 * scale) {
-            value = 0.0;
-        }
-        return new Extreme(value, bestAt, null);
     }
 }

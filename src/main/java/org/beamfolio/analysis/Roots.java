@@ -13,11 +13,15 @@ public final class Roots {
 
     public static List<Double> in(Polynomial p, double a, double b) {
         List<Double> roots = new ArrayList<>();
-        if (p.degree() == 0) {
+        if (p.degree() == 0 || clearOfZero(p, a, b)) {
             return roots;
         }
         if (p.degree() == 1) {
             add(roots, -p.coefficient(0) / p.coefficient(1), a, b);
+            return roots;
+        }
+        if (p.degree() == 2) {
+            quadratic(p.coefficient(2), p.coefficient(1), p.coefficient(0), a, b, roots);
             return roots;
         }
         List<Double> breaks = new ArrayList<>();
@@ -41,24 +45,70 @@ public final class Roots {
         return roots;
     }
 
+    /**
+     * True when |p| cannot reach zero on [a, b]: |c0| exceeds the sum of |c_k| m^k over k >= 1,
+     * m the larger of |a| and |b|. Most pieces of a beam field are settled by this test alone.
+     */
+    private static boolean clearOfZero(Polynomial p, double a, double b) {
+        double m = Math.max(Math.abs(a), Math.abs(b));
+        double bound = 0;
+        double power = 1;
+        for (int k = 1; k <= p.degree(); k++) {
+            power *= m;
+            bound += Math.abs(p.coefficient(k)) * power;
+        }
+        return Math.abs(p.coefficient(0)) > bound * (1 + 1e-12);
+    }
+
+    /** Real roots of a x^2 + b x + c in [lo, hi], by the cancellation-free form of the formula. */
+    private static void quadratic(double a, double b, double c, double lo, double hi, List<Double> roots) {
+        double disc = b * b - 4 * a * c;
+        if (disc < 0) {
+            return;
+        }
+        double q = -0.5 * (b + Math.copySign(Math.sqrt(disc), b));
+        double r1 = q / a;
+        double r2 = q != 0 ? c / q : r1;
+        double first = Math.min(r1, r2);
+        double second = Math.max(r1, r2);
+        add(roots, first, lo, hi);
+        if (second != first) {
+            add(roots, second, lo, hi);
+        }
+    }
+
+    /**
+     * A root in a bracket where the polynomial is monotone: Newton steps kept inside the
+     * bracket, falling back to halving, until the bracket or the step vanishes.
+     */
     private static double bisect(Polynomial p, double lo, double hi, double flo) {
+        Polynomial dp = p.derivative();
+        double x = 0.5 * (lo + hi);
         for (int i = 0; i < 200 && hi - lo > 0; i++) {
-            double mid = 0.5 * (lo + hi);
-            if (mid <= lo || mid >= hi) {
+            double fx = p.at(x);
+            if (fx == 0) {
+                return x;
+            }
+            if (Math.signum(fx) == Math.signum(flo)) {
+                lo = x;
+                flo = fx;
+            } else {
+                hi = x;
+            }
+            double slope = dp.at(x);
+            double next = slope != 0 ? x - fx / slope : Double.NaN;
+            if (!(next > lo && next < hi)) {
+                next = 0.5 * (lo + hi);
+            }
+            if (next == x || next <= lo || next >= hi) {
                 break;
             }
-            double fm = p.at(mid);
-            if (fm == 0) {
-                return mid;
+            if (Math.abs(next - x) <= 1e-16 * Math.max(Math.abs(lo), Math.abs(hi))) {
+                return next;
             }
-            if (Math.signum(fm) == Math.signum(flo)) {
-                lo = mid;
-                flo = fm;
-            } else {
-                hi = mid;
-            }
+            x = next;
         }
-        return 0.5 * (lo + hi);
+        return x;
     }
 
     private static void add(List<Double> roots, double r, double a, double b) {

@@ -47,16 +47,33 @@ public final class Stresses {
         return shear == null ? null : r.shear().scaledBy(shear);
     }
 
+    /**
+     * Every extreme of a response in one pass per field: the candidate points of the moment
+     * (its ends and the zeros of shear) serve the fibre stresses too, which are scaled moments.
+     */
     Extremes extremes(Response r) {
-        Field t = top(r);
-        Field b = bottom(r);
-        Field tau = shearStress(r);
-        Extreme tauMax = null;
-        if (tau != null) {
-            Extreme e = tau.maxAbs();
-            tauMax = new Extreme(Math.abs(e.value()), e.at(), null);
+        Field v = r.shear();
+        Field m = r.moment();
+        Field d = r.deflection();
+        int n = m.size();
+        double[][] vPoints = new double[n][];
+        double[][] mPoints = new double[n][];
+        for (int i = 0; i < n; i++) {
+            vPoints[i] = v.candidates(i);
+            mPoints[i] = m.candidates(i);
         }
-        return new Extremes(r.shear().max(), r.shear().min(), r.moment().max(), r.moment().min(),
-                r.deflection().max(), r.deflection().min(), t.max(), t.min(), b.max(), b.min(), tauMax);
+        Extreme[] shearRange = v.extremes(null, v, i -> vPoints[i]);
+        Extreme[] momentRange = m.extremes(null, m, i -> mPoints[i]);
+        Extreme[] deflectionRange = d.extremes(null, d, d::candidates);
+        Extreme[] topRange = m.extremes(top, m, i -> mPoints[i]);
+        Extreme[] bottomRange = m.extremes(bottom, m, i -> mPoints[i]);
+        Extreme tauMax = null;
+        if (shear != null) {
+            Extreme[] tau = v.extremes(shear, v, i -> vPoints[i]);
+            Extreme larger = Math.abs(tau[1].value()) > Math.abs(tau[0].value()) ? tau[1] : tau[0];
+            tauMax = new Extreme(Math.abs(larger.value()), larger.at(), null);
+        }
+        return new Extremes(shearRange[0], shearRange[1], momentRange[0], momentRange[1], deflectionRange[0], deflectionRange[1],
+                topRange[0], topRange[1], bottomRange[0], bottomRange[1], tauMax);
     }
 }

@@ -6,6 +6,10 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
 import org.beamfolio.job.JobReader;
 import org.beamfolio.units.Numbers;
 import java.util.concurrent.Callable;
@@ -52,32 +56,47 @@ final class BuildCommand implements Callable<Integer> {
             return Main.BAD_INPUT;
         }
         ExitStatus status = new ExitStatus();
-        Pipeline pipeline = new Pipeline();
         boolean terminal = System.console() != null;
         List<String[]> table = new ArrayList<>();
-        for (int i = 0; i < files.size(); i++) {
-            Path file = files.get(i);
-            if (terminal && files.size() > 1) {
-                stderr.print("\r[" + (i + 1) + "/" + files.size() + "] " + file.getFileName() + "\u001b[K");
-                stderr.flush();
+        // Jobs are built side by side, one worker per core, each with its own pipeline: the PDF
+        // layout and its fonts are not thread-safe. Output is reported in job order.
+        int workers = Math.max(1, Math.min(files.size(), Runtime.getRuntime().availableProcessors()));
+        ExecutorService pool = Executors.newFixedThreadPool(workers);
+        ThreadLocal<Pipeline> pipelines = ThreadLocal.withInitial(Pipeline::new);
+        try {
+            List<Future<Timed>> futures = new ArrayList<>();
+            for (Path file : files) {
+                futures.add(pool.submit(() -> {
+                    long start = System.nanoTime();
+                    Pipeline.Outcome outcome = pipelines.get().build(file, out, csv, previous);
+                    return new Timed(outcome, (System.nanoTime() - start) / 1_000_000);
+                }));
             }
-            long start = System.nanoTime();
-            Pipeline.Outcome outcome = pipeline.build(file, out, csv, previous);
-            long millis = (System.nanoTime() - start) / 1_000_000;
-            if (terminal && files.size() > 1 && !outcome.messages().isEmpty()) {
-                stderr.print("\r\u001b[K");
+            for (int i = 0; i < files.size(); i++) {
+                Path file = files.get(i);
+                if (terminal && files.size() > 1) {
+                    stderr.print("\r[" + (i + 1) + "/" + files.size() + "] " + file.getFileName() + "\u001b[K");
+                    stderr.flush();
+                }
+                Timed timed = get(futures.get(i));
+                Pipeline.Outcome outcome = timed.outcome();
+                if (terminal && files.size() > 1 && !outcome.messages().isEmpty()) {
+                    stderr.print("\r\u001b[K");
+                }
+                outcome.messages().forEach(stderr::print);
+                if (outcome.status() == Main.OK) {
+                    stdout.println("wrote " + outcome.pdf() + " and " + outcome.results());
+                    table.add(new String[] {JobReader.jobName(file), Integer.toString(outcome.pages()),
+                            Double.isNaN(outcome.governingRatio()) ? "-" : Numbers.format(outcome.governingRatio()),
+                            Double.isNaN(outcome.governingRatio()) ? "no checks" : outcome.pass() ? "pass" : "FAIL", timed.millis() + " ms"});
+                } else {
+                    table.add(new String[] {JobReader.jobName(file), "-", "-", outcome.status() == Main.BAD_INPUT ? "bad input" : "failed",
+                            timed.millis() + " ms"});
+                }
+                status.add(outcome.status());
             }
-            outcome.messages().forEach(stderr::print);
-            if (outcome.status() == Main.OK) {
-                stdout.println("wrote " + outcome.pdf() + " and " + outcome.results());
-                table.add(new String[] {JobReader.jobName(file), Integer.toString(outcome.pages()),
-                        Double.isNaN(outcome.governingRatio()) ? "-" : Numbers.format(outcome.governingRatio()),
-                        Double.isNaN(outcome.governingRatio()) ? "no checks" : outcome.pass() ? "pass" : "FAIL", millis + " ms"});
-            } else {
-                table.add(new String[] {JobReader.jobName(file), "-", "-", outcome.status() == Main.BAD_INPUT ? "bad input" : "failed",
-                        millis + " ms"});
-            }
-            status.add(outcome.status());
+        } finally {
+            pool.shutdownNow();
         }
         if (terminal && files.size() > 1) {
             stderr.print("\r\u001b[K");
@@ -88,5 +107,18 @@ final class BuildCommand implements Callable<Integer> {
         stdout.flush();
         stderr.flush();
         return status.get();
+    }
+
+    private record Timed(Pipeline.Outcome outcome, long millis) {}
+
+    private static Timed get(Future<Timed> future) {
+        try {
+            return future.get();
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new IllegalStateException("interrupted while building", e);
+        } catch (ExecutionException e) {
+            throw new IllegalStateException("a worker failed: " + e.getCause(), e.getCause());
+        }
     }
 }
