@@ -38,7 +38,7 @@ import org.openjdk.jmh.annotations.Warmup;
 @State(Scope.Benchmark)
 @BenchmarkMode(Mode.AverageTime)
 @OutputTimeUnit(TimeUnit.MILLISECONDS)
-@Warmup(iterations = 3, time = 2)
+@Warmup(iterations = 12, time = 3)
 @Measurement(iterations = 5, time = 2)
 @Fork(1)
 public class SolverBenchmark {

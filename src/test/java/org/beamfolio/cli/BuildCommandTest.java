@@ -151,6 +151,22 @@ class BuildCommandTest {
     }
 
     @Test
+    void aParallelFolderBuildGivesTheBytesOfBuildingEachAlone() throws Exception {
+        Path together = temp.resolve("together");
+        assertEquals(Main.OK, Run.of("build", "example-jobs", "--out", together.toString()).status());
+        try (var jobs = Files.list(Path.of("example-jobs"))) {
+            for (Path job : jobs.filter(p -> p.toString().endsWith(".yaml")).toList()) {
+                Path alone = temp.resolve("alone");
+                assertEquals(Main.OK, Run.of("build", job.toString(), "--out", alone.toString()).status());
+                String name = job.getFileName().toString().replace(".yaml", "");
+                assertArrayEquals(Files.readAllBytes(alone.resolve(name + ".pdf")), Files.readAllBytes(together.resolve(name + ".pdf")), name);
+                assertArrayEquals(Files.readAllBytes(alone.resolve(name + ".results.json")),
+                        Files.readAllBytes(together.resolve(name + ".results.json")), name);
+            }
+        }
+    }
+
+    @Test
     void helpAndVersion() {
         Run help = Run.of("--help");
         assertEquals(0, help.status());
