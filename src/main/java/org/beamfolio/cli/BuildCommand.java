@@ -35,6 +35,9 @@ final class BuildCommand implements Callable<Integer> {
             description = "the previous revision of the job: the package gets a sheet of what changed (one job only)")
     Path previous;
 
+    @Option(names = "--no-pdfa", description = "write a plain PDF rather than PDF/A-3b")
+    boolean noPdfa;
+
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
 
@@ -62,7 +65,7 @@ final class BuildCommand implements Callable<Integer> {
         // layout and its fonts are not thread-safe. Output is reported in job order.
         int workers = Math.max(1, Math.min(files.size(), Runtime.getRuntime().availableProcessors()));
         ExecutorService pool = Executors.newFixedThreadPool(workers);
-        ThreadLocal<Pipeline> pipelines = ThreadLocal.withInitial(Pipeline::new);
+        ThreadLocal<Pipeline> pipelines = ThreadLocal.withInitial(() -> new Pipeline(!noPdfa));
         try {
             List<Future<Timed>> futures = new ArrayList<>();
             for (Path file : files) {

@@ -25,6 +25,16 @@ import org.beamfolio.results.ResultsWriter;
  */
 final class Pipeline {
     private final PackageRenderer renderer = new PackageRenderer();
+    private final boolean archival;
+
+    Pipeline() {
+        this(true);
+    }
+
+    /** @param archival PDF/A-3b packages (the default) or plain PDF */
+    Pipeline(boolean archival) {
+        this.archival = archival;
+    }
 
     /** What building one job gave: its files, sheets, governing check ratio (NaN without checks) and whether all pass. */
     record Outcome(int status, List<String> messages, Path pdf, Path results, int pages, double governingRatio, boolean pass) {
@@ -93,8 +103,8 @@ final class Pipeline {
         byte[] document;
         try {
             byte[] json = ResultsWriter.write(solved.result(), solved.checks()).getBytes(StandardCharsets.UTF_8);
-            document = before == null ? renderer.render(solved.result(), solved.checks())
-                    : renderer.render(solved.result(), solved.checks(), before.result(), before.checks());
+            document = renderer.render(solved.result(), solved.checks(), before == null ? null : before.result(),
+                    before == null ? List.of() : before.checks(), archival);
             Files.createDirectories(outDir);
             List<Path> targets = new ArrayList<>(List.of(results, pdf));
             List<byte[]> contents = new ArrayList<>(List.of(json, document));

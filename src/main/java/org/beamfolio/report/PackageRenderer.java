@@ -63,10 +63,16 @@ public final class PackageRenderer {
 
     /** The package, with a revision-delta sheet when a previous revision's results are given. */
     public byte[] render(AnalysisResult result, List<CheckOutcome> checks, AnalysisResult previous, List<CheckOutcome> previousChecks) {
+        return render(result, checks, previous, previousChecks, true);
+    }
+
+    /** @param archival PDF/A-3b (the default) or a plain PDF */
+    public byte[] render(AnalysisResult result, List<CheckOutcome> checks, AnalysisResult previous, List<CheckOutcome> previousChecks,
+                         boolean archival) {
         ReportModelBuilder.Built built = new ReportModelBuilder(result).build(checks, previous, previousChecks);
         String xhtml = xhtml(built.model());
         PdfRenderer.Attachment job = new PdfRenderer.Attachment(result.job().name() + ".yaml",
                 result.job().sourceBytes(), "Job file of this calculation package");
-        return pdf.render(xhtml, built.drawings(), job, result.job().project().date());
+        return pdf.render(xhtml, built.drawings(), job, result.job().project().date(), archival, result.job().project().title());
     }
 }

@@ -48,7 +48,8 @@ public final class LoadingDiagram implements Drawing {
                     band.lineTo(x1, base - h1);
                     band.lineTo(x1, base);
                     band.closePath();
-                    g.setColor(new java.awt.Color(0xb3, 0x6b, 0x00, 40));
+                    // a solid tint rather than transparency, which archival PDF would have to qualify
+                    g.setColor(new java.awt.Color(0xf5, 0xe8, 0xd6));
                     g.fill(band);
                     g.setColor(Style.LOAD);
                     g.setStroke(Style.THIN);

@@ -43,12 +43,23 @@ public final class PdfRenderer {
     }
 
     public byte[] render(String xhtml, Map<String, Drawing> drawings, Attachment attachment, String isoDate) {
+        return render(xhtml, drawings, attachment, isoDate, true, "");
+    }
+
+    /**
+     * @param archival PDF/A-3b (ISO 19005-3): output intent, XMP, the job as an associated file
+     * @param title the document title, repeated in the XMP metadata
+     */
+    public byte[] render(String xhtml, Map<String, Drawing> drawings, Attachment attachment, String isoDate, boolean archival,
+                         String title) {
         try {
             ITextRenderer renderer = new ITextRenderer();
             BaseFont[] documentFonts = fonts.forDocument();
             SecureRandom prefixes = seeded(xhtml);
             for (int i = 0; i < documentFonts.length; i++) {
                 documentFonts[i].setSecureRandom(prefixes);
+                // PDF/A-2 and later forbid an incomplete CIDSet; none is simplest
+                documentFonts[i].setIncludeCidSet(false);
                 renderer.getFontResolver().addFont(documentFonts[i], EmbeddedFonts.FILES[i], null);
             }
             fonts.use(documentFonts);
@@ -62,14 +73,23 @@ public final class PdfRenderer {
                     writer.getInfo().put(PdfName.CREATIONDATE, new PdfDate(date));
                     writer.getInfo().put(PdfName.MODDATE, new PdfDate(date));
                     try {
-                        PdfFileSpecification file = PdfFileSpecification.fileEmbedded(writer, null, attachment.fileName(),
-                                attachment.bytes());
-                        writer.addFileAttachment(attachment.description(), file);
+                        if (archival) {
+                            PdfA.outputIntent(writer);
+                            PdfA.attach(writer, attachment, date);
+                            writer.setXmpMetadata(PdfA.xmp(title, PRODUCER, iso(date)));
+                        } else {
+                            PdfFileSpecification file = PdfFileSpecification.fileEmbedded(writer, null, attachment.fileName(),
+                                    attachment.bytes());
+                            writer.addFileAttachment(attachment.description(), file);
+                        }
                     } catch (IOException e) {
                         throw new UncheckedIOException(e);
                     }
                 }
             });
+            if (archival) {
+                renderer.setPDFVersion(PdfWriter.VERSION_1_7);
+            }
             renderer.setDocumentFromString(xhtml);
             renderer.layout();
             ByteArrayOutputStream out = new ByteArrayOutputStream();
@@ -78,6 +98,14 @@ public final class PdfRenderer {
         } catch (com.lowagie.text.DocumentException e) {
             throw new IllegalStateException("PDF layout failed: " + e.getMessage(), e);
         }
+    }
+
+    /** What OpenPDF writes as the producer; the XMP metadata must say the same. */
+    static final String PRODUCER = "OpenPDF " + com.lowagie.text.Document.getVersion().replace("OpenPDF ", "").trim();
+
+    private static String iso(Calendar c) {
+        return String.format(java.util.Locale.ROOT, "%04d-%02d-%02dT00:00:00Z", c.get(Calendar.YEAR), c.get(Calendar.MONTH) + 1,
+                c.get(Calendar.DAY_OF_MONTH));
     }
 
     private static SecureRandom seeded(String content) {
