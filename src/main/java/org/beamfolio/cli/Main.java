@@ -14,7 +14,8 @@ import picocli.CommandLine.Command;
  */
 @Command(name = "beamfolio", mixinStandardHelpOptions = true, versionProvider = Main.VersionProvider.class,
         description = "Exact beam analysis and calculation packages for structural engineers.",
-        subcommands = {BuildCommand.class, CheckCommand.class, NewCommand.class, CommandLine.HelpCommand.class})
+        subcommands = {BuildCommand.class, CheckCommand.class, NewCommand.class, SealCommand.class, VerifyCommand.class,
+                CommandLine.HelpCommand.class})
 public final class Main implements Runnable {
     public static final int OK = 0;
     public static final int INTERNAL_FAILURE = 1;

@@ -50,6 +50,7 @@ final class ReportModelBuilder {
                 p.date(), p.checkedBy(), p.client(), p.location(), job.report().paper().name().toLowerCase(Locale.ROOT),
                 Version.get(), job.name() + ".yaml");
         drawings.put("sign-convention", new SignConventionSketch());
+        drawings.put("seal-box", new org.beamfolio.report.drawing.SealBox());
         LoadingPart loading = new LoadingPart(result, t, drawings);
         List<ReportModel.CombinationSheet> analyses = new CombinationPart(result, t, drawings).sheets(governing(checks));
         ReportModel.Envelope envelope = new CombinationPart(result, t, drawings).envelope();

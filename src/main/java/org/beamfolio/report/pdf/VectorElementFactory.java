@@ -90,6 +90,9 @@ final class VectorElementFactory implements ReplacedElementFactory {
                 g.dispose();
             }
             page.addTemplate(template, area.getLeft(), area.getBottom());
+            if (drawing instanceof org.beamfolio.report.drawing.SealBox) {
+                SealField.add(device.getWriter(), area, w, h);
+            }
         }
 
         @Override
