@@ -2,7 +2,6 @@ package org.beamfolio.results;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import org.beamfolio.analysis.AnalysisResult;
 import org.beamfolio.analysis.CombinationResult;
 import org.beamfolio.analysis.Field;
@@ -87,9 +86,5 @@ public final class CsvExport {
             return "\"" + text.replace("\"", "\"\"") + "\"";
         }
         return text;
-    }
-
-    static String format(double v) {
-        return String.format(Locale.ROOT, "%s", v);
     }
 }
