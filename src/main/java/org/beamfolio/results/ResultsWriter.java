@@ -1,10 +1,10 @@
 package org.beamfolio.results;
 
-import com.fasterxml.jackson.core.JsonProcessingException;
-import com.fasterxml.jackson.databind.ObjectMapper;
-import com.fasterxml.jackson.databind.SerializationFeature;
-import com.fasterxml.jackson.databind.node.ArrayNode;
-import com.fasterxml.jackson.databind.node.ObjectNode;
+import com.fasterxml.jackson.core.JsonFactory;
+import com.fasterxml.jackson.core.JsonGenerator;
+import java.io.IOException;
+import java.io.StringWriter;
+import java.io.UncheckedIOException;
 import java.util.List;
 import java.util.Map;
 import org.beamfolio.analysis.AnalysisResult;
@@ -13,136 +13,165 @@ import org.beamfolio.analysis.Extreme;
 import org.beamfolio.analysis.Extremes;
 import org.beamfolio.model.Support;
 import org.beamfolio.section.SectionProperties;
+import org.beamfolio.units.Unit;
 
 /**
  * Writes the results file, format {@code beamfolio-results/1}, in the report's units and at full
- * precision (each double printed as the shortest decimal that reads back to the same value).
+ * precision (each double printed as the shortest decimal that reads back to the same value),
+ * with Jackson's streaming generator: the tree model would cost start-up time for nothing.
  */
 public final class ResultsWriter {
     public static final String FORMAT = "beamfolio-results/1";
-    private static final ObjectMapper MAPPER = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
+    private static final JsonFactory JSON = new JsonFactory();
 
     private ResultsWriter() {}
 
     public static String write(AnalysisResult result, List<CheckOutcome> checks) {
-        ReportUnits u = ReportUnits.of(result.job().report().units());
-        ObjectNode root = MAPPER.createObjectNode();
-        root.put("format", FORMAT);
-        root.put("tool_version", Version.get());
-        root.put("input_sha256", result.job().sha256());
-        ObjectNode units = root.putObject("units");
-        units.put("length", u.length().symbol());
-        units.put("force", u.force().symbol());
-        units.put("moment", u.moment().symbol());
-        units.put("distributed", u.distributed().symbol());
-        units.put("stress", u.stress().symbol());
-        units.put("deflection", u.deflection().symbol());
-        units.put("section", u.sectionLength().symbol());
-        ObjectNode solver = root.putObject("solver");
-        solver.put("method", "direct stiffness, exact Euler-Bernoulli elements");
-        solver.put("elements", result.model().elements());
-        solver.put("unknowns", result.model().unknowns());
-        solver.put("pivot_ratio", result.pivotRatio());
-        solver.put("poorly_conditioned", result.pivotRatio() < AnalysisResult.POOR_CONDITIONING);
-        ObjectNode sections = root.putObject("sections");
-        for (Map.Entry<String, SectionProperties> e : result.sections().entrySet()) {
-            sections.set(e.getKey(), section(e.getValue(), u));
+        StringWriter text = new StringWriter();
+        try (JsonGenerator g = JSON.createGenerator(text)) {
+            g.useDefaultPrettyPrinter();
+            write(g, result, checks, ReportUnits.of(result.job().report().units()));
+        } catch (IOException e) {
+            throw new UncheckedIOException("results could not be written", e);
         }
-        ArrayNode combinations = root.putArray("combinations");
-        for (CombinationResult c : result.combinations()) {
-            ObjectNode node = combinations.addObject();
-            node.put("name", c.name());
-            ObjectNode factors = node.putObject("factors");
-            c.factors().forEach(factors::put);
-            node.put("source", c.reference());
-            if (!c.arrangement().isEmpty()) {
-                node.put("pattern", c.arrangement());
-            }
-            ArrayNode reactions = node.putArray("reactions");
-            List<Support> supports = result.job().beam().supports();
-            for (int i = 0; i < supports.size(); i++) {
-                ObjectNode r = reactions.addObject();
-                r.put("at", u.length().fromSi(supports.get(i).at()));
-                r.put("type", supports.get(i).kind().label());
-                r.put("force", u.force().fromSi(c.response().reactionForce()[i]));
-                r.put("moment", u.moment().fromSi(c.response().reactionMoment()[i]));
-            }
-            node.set("extremes", extremes(c.extremes(), u, false));
-        }
-        if (result.envelope() != null) {
-            root.set("envelope", extremes(result.envelope(), u, true));
-        } else {
-            root.putObject("envelope");
-        }
-        ArrayNode checkArray = root.putArray("checks");
-        for (CheckOutcome check : checks) {
-            ObjectNode node = checkArray.addObject();
-            node.put("id", check.id());
-            node.put("description", check.description());
-            node.put("demand", check.demand());
-            node.put("limit", check.limit());
-            node.put("ratio", check.ratio());
-            node.put("pass", check.pass());
-            node.put("combination", check.combination());
-            node.put("at", u.length().fromSi(check.at()));
-            node.put("unit", check.unit());
-        }
-        try {
-            return MAPPER.writeValueAsString(root) + "\n";
-        } catch (JsonProcessingException e) {
-            throw new IllegalStateException("results tree could not be written", e);
-        }
+        return text + "\n";
     }
 
-    private static ObjectNode section(SectionProperties p, ReportUnits u) {
-        ObjectNode node = MAPPER.createObjectNode();
-        if (p.area() != null) {
-            node.put("A", u.area().fromSi(p.area()));
+    private static void write(JsonGenerator g, AnalysisResult result, List<CheckOutcome> checks, ReportUnits u) throws IOException {
+        g.writeStartObject();
+        g.writeStringField("format", FORMAT);
+        g.writeStringField("tool_version", Version.get());
+        g.writeStringField("input_sha256", result.job().sha256());
+        g.writeObjectFieldStart("solver");
+        g.writeStringField("method", "direct stiffness, exact Euler-Bernoulli elements");
+        g.writeNumberField("elements", result.model().elements());
+        g.writeNumberField("unknowns", result.model().unknowns());
+        g.writeNumberField("pivot_ratio", result.pivotRatio());
+        g.writeBooleanField("poorly_conditioned", result.pivotRatio() < AnalysisResult.POOR_CONDITIONING);
+        g.writeEndObject();
+        g.writeObjectFieldStart("units");
+        g.writeStringField("length", u.length().symbol());
+        g.writeStringField("force", u.force().symbol());
+        g.writeStringField("moment", u.moment().symbol());
+        g.writeStringField("distributed", u.distributed().symbol());
+        g.writeStringField("stress", u.stress().symbol());
+        g.writeStringField("deflection", u.deflection().symbol());
+        g.writeStringField("section", u.sectionLength().symbol());
+        g.writeEndObject();
+        g.writeObjectFieldStart("sections");
+        for (Map.Entry<String, SectionProperties> e : result.sections().entrySet()) {
+            g.writeFieldName(e.getKey());
+            section(g, e.getValue(), u);
         }
-        node.put("I", u.secondMoment().fromSi(p.inertia()));
-        node.put("depth", u.sectionLength().fromSi(p.depth()));
-        node.put("y_bottom", u.sectionLength().fromSi(p.yBottom()));
-        node.put("c_top", u.sectionLength().fromSi(p.cTop()));
-        node.put("c_bottom", u.sectionLength().fromSi(p.cBottom()));
-        node.put("S_top", u.firstMoment().fromSi(p.sTop()));
-        node.put("S_bottom", u.firstMoment().fromSi(p.sBottom()));
+        g.writeEndObject();
+        g.writeArrayFieldStart("combinations");
+        List<Support> supports = result.job().beam().supports();
+        for (CombinationResult c : result.combinations()) {
+            g.writeStartObject();
+            g.writeStringField("name", c.name());
+            g.writeObjectFieldStart("factors");
+            for (Map.Entry<String, Double> f : c.factors().entrySet()) {
+                g.writeNumberField(f.getKey(), f.getValue());
+            }
+            g.writeEndObject();
+            g.writeStringField("source", c.reference());
+            if (!c.arrangement().isEmpty()) {
+                g.writeStringField("pattern", c.arrangement());
+            }
+            g.writeArrayFieldStart("reactions");
+            for (int i = 0; i < supports.size(); i++) {
+                g.writeStartObject();
+                g.writeNumberField("at", u.length().fromSi(supports.get(i).at()));
+                g.writeStringField("type", supports.get(i).kind().label());
+                g.writeNumberField("force", u.force().fromSi(c.response().reactionForce()[i]));
+                g.writeNumberField("moment", u.moment().fromSi(c.response().reactionMoment()[i]));
+                g.writeEndObject();
+            }
+            g.writeEndArray();
+            g.writeFieldName("extremes");
+            extremes(g, c.extremes(), u, false);
+            g.writeEndObject();
+        }
+        g.writeEndArray();
+        g.writeFieldName("envelope");
+        if (result.envelope() != null) {
+            extremes(g, result.envelope(), u, true);
+        } else {
+            g.writeStartObject();
+            g.writeEndObject();
+        }
+        g.writeArrayFieldStart("checks");
+        for (CheckOutcome check : checks) {
+            g.writeStartObject();
+            g.writeStringField("id", check.id());
+            g.writeStringField("description", check.description());
+            g.writeNumberField("demand", check.demand());
+            g.writeNumberField("limit", check.limit());
+            g.writeNumberField("ratio", check.ratio());
+            g.writeBooleanField("pass", check.pass());
+            g.writeStringField("combination", check.combination());
+            g.writeNumberField("at", u.length().fromSi(check.at()));
+            g.writeStringField("unit", check.unit());
+            g.writeEndObject();
+        }
+        g.writeEndArray();
+        g.writeEndObject();
+    }
+
+    private static void section(JsonGenerator g, SectionProperties p, ReportUnits u) throws IOException {
+        g.writeStartObject();
+        if (p.area() != null) {
+            g.writeNumberField("A", u.area().fromSi(p.area()));
+        }
+        g.writeNumberField("I", u.secondMoment().fromSi(p.inertia()));
+        g.writeNumberField("depth", u.sectionLength().fromSi(p.depth()));
+        g.writeNumberField("y_bottom", u.sectionLength().fromSi(p.yBottom()));
+        g.writeNumberField("c_top", u.sectionLength().fromSi(p.cTop()));
+        g.writeNumberField("c_bottom", u.sectionLength().fromSi(p.cBottom()));
+        g.writeNumberField("S_top", u.firstMoment().fromSi(p.sTop()));
+        g.writeNumberField("S_bottom", u.firstMoment().fromSi(p.sBottom()));
         if (p.qNeutral() != null) {
-            node.put("Q", u.firstMoment().fromSi(p.qNeutral()));
+            g.writeNumberField("Q", u.firstMoment().fromSi(p.qNeutral()));
         }
         if (p.tNeutral() != null) {
-            node.put("t", u.sectionLength().fromSi(p.tNeutral()));
+            g.writeNumberField("t", u.sectionLength().fromSi(p.tNeutral()));
         }
-        return node;
+        g.writeEndObject();
     }
 
-    private static ObjectNode extremes(Extremes e, ReportUnits u, boolean named) {
-        ObjectNode node = MAPPER.createObjectNode();
-        pair(node, "shear", e.shearMax(), e.shearMin(), u.force(), u, named);
-        pair(node, "moment", e.momentMax(), e.momentMin(), u.moment(), u, named);
-        pair(node, "deflection", e.deflectionMax(), e.deflectionMin(), u.deflection(), u, named);
-        pair(node, "stress_top", e.stressTopMax(), e.stressTopMin(), u.stress(), u, named);
-        pair(node, "stress_bottom", e.stressBottomMax(), e.stressBottomMin(), u.stress(), u, named);
+    private static void extremes(JsonGenerator g, Extremes e, ReportUnits u, boolean named) throws IOException {
+        g.writeStartObject();
+        pair(g, "shear", e.shearMax(), e.shearMin(), u.force(), u, named);
+        pair(g, "moment", e.momentMax(), e.momentMin(), u.moment(), u, named);
+        pair(g, "deflection", e.deflectionMax(), e.deflectionMin(), u.deflection(), u, named);
+        pair(g, "stress_top", e.stressTopMax(), e.stressTopMin(), u.stress(), u, named);
+        pair(g, "stress_bottom", e.stressBottomMax(), e.stressBottomMin(), u.stress(), u, named);
         if (e.shearStressMax() != null) {
-            ObjectNode tau = node.putObject("shear_stress");
-            tau.set("max", point(e.shearStressMax(), u.stress(), u, named));
+            g.writeObjectFieldStart("shear_stress");
+            g.writeFieldName("max");
+            point(g, e.shearStressMax(), u.stress(), u, named);
+            g.writeEndObject();
         }
-        return node;
+        g.writeEndObject();
     }
 
-    private static void pair(ObjectNode parent, String key, Extreme max, Extreme min, org.beamfolio.units.Unit unit,
-                             ReportUnits u, boolean named) {
-        ObjectNode node = parent.putObject(key);
-        node.set("max", point(max, unit, u, named));
-        node.set("min", point(min, unit, u, named));
+    private static void pair(JsonGenerator g, String key, Extreme max, Extreme min, Unit unit, ReportUnits u, boolean named)
+            throws IOException {
+        g.writeObjectFieldStart(key);
+        g.writeFieldName("max");
+        point(g, max, unit, u, named);
+        g.writeFieldName("min");
+        point(g, min, unit, u, named);
+        g.writeEndObject();
     }
 
-    private static ObjectNode point(Extreme e, org.beamfolio.units.Unit unit, ReportUnits u, boolean named) {
-        ObjectNode node = MAPPER.createObjectNode();
-        node.put("value", unit.fromSi(e.value()) + 0.0);
-        node.put("at", u.length().fromSi(e.at()));
+    private static void point(JsonGenerator g, Extreme e, Unit unit, ReportUnits u, boolean named) throws IOException {
+        g.writeStartObject();
+        g.writeNumberField("value", unit.fromSi(e.value()) + 0.0);
+        g.writeNumberField("at", u.length().fromSi(e.at()));
         if (named) {
-            node.put("combination", e.combination());
+            g.writeStringField("combination", e.combination());
         }
-        return node;
+        g.writeEndObject();
     }
 }
