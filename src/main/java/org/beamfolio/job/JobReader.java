@@ -147,6 +147,11 @@ public final class JobReader {
             Beam beam = BeamReader.read(context, top.required("beam"), materials, sections);
             List<Load> loads = LoadReader.readAll(context, top.optional("loads"), beam);
             Map<String, String> cases = cases(top.optional("cases"));
+            if (loads.isEmpty() && (beam == null || beam.selfWeightCase() == null) && context.diagnostics().isEmpty()) {
+                YamlNode at = top.optional("loads");
+                context.error(at != null ? at.location() : root.location(), "loads",
+                        "the job has no loads: add at least one load (or beam.self_weight) for there to be anything to check");
+            }
             CombinationReader.Outcome combos = CombinationReader.read(context, top, loads, beam);
             if (combos != null && combos.stressCheck() && beam != null) {
                 requireAllowables(top, materials, beam);
