@@ -75,6 +75,11 @@ final class CombinationReader {
                     }
                 }
                 f.rejectUnknown();
+                if (stress && BuiltInSets.ASCE7_LRFD.equals(setName)) {
+                    // factored strength combinations are not compared with allowable stresses
+                    c.error(f.optional("stress"), f.path("stress"), "allowable-stress checks need allowable-stress or service combinations,"
+                            + " and ASCE7-LRFD has none: use ASCE7-ASD, EN1990 or an explicit list, or set stress: false");
+                }
             }
         }
         return new Outcome(setName, combinations, pattern, stress, deflection);
