@@ -79,16 +79,22 @@ public final class Derivations {
         Notation n = new Notation(result);
         Steps steps = new Steps();
         Method method = methodFor(result);
+        List<Derivation.Table> tables = new java.util.ArrayList<>();
         String title = switch (method) {
             case STATICS -> new StaticsDerivation(result, combination, loads, n, steps).write();
             case CANTILEVER -> new CantileverDerivation(result, combination, loads, n, steps).write();
             case THREE_MOMENT -> new ThreeMomentDerivation(result, combination, loads, n, steps).write();
-            case STIFFNESS -> new StiffnessDerivation(result, combination, loads, n, steps).write();
+            case STIFFNESS -> {
+                StiffnessDerivation stiffness = new StiffnessDerivation(result, combination, loads, n, steps);
+                String written = stiffness.write();
+                tables.addAll(stiffness.tables());
+                yield written;
+            }
         };
         AreaMethod area = new AreaMethod(result, combination, loads, n, steps);
         area.zeroShearSteps();
         deflections(result, combination, n, steps);
-        return new Derivation(combination.name(), title, steps.list(), area.header(), area.rows(),
-                "Shear and moment by the area method between key points");
+        tables.add(new Derivation.Table("Shear and moment by the area method between key points", area.header(), area.rows()));
+        return new Derivation(combination.name(), title, steps.list(), tables);
     }
 }

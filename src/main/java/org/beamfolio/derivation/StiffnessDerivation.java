@@ -2,6 +2,7 @@ package org.beamfolio.derivation;
 
 import java.util.List;
 import org.beamfolio.analysis.AnalysisResult;
+import org.beamfolio.analysis.CaseSolver;
 import org.beamfolio.analysis.CombinationResult;
 import org.beamfolio.analysis.Response;
 import org.beamfolio.analysis.StructureModel;
@@ -15,14 +16,18 @@ import org.beamfolio.model.Support;
  * tests independently.
  */
 final class StiffnessDerivation {
+    private static final int ROWS = 40;
+
     private final AnalysisResult result;
     private final CombinationResult combination;
+    private final List<Load> loads;
     private final Notation n;
     private final Steps steps;
 
     StiffnessDerivation(AnalysisResult result, CombinationResult combination, List<Load> loads, Notation n, Steps steps) {
         this.result = result;
         this.combination = combination;
+        this.loads = loads;
         this.n = n;
         this.steps = steps;
     }
@@ -50,5 +55,46 @@ final class StiffnessDerivation {
                     n.f(r.reactionForce()[i]), n.fu(), "matrix solution");
         }
         return "Direct stiffness method (matrix solution)";
+    }
+
+    /** The equivalent nodal loads of each element and the solved displacements at each node. */
+    List<Derivation.Table> tables() {
+        StructureModel m = result.model();
+        CaseSolver.ElementLoads element = CaseSolver.loadsOf(m, loads);
+        String f = Notation.sym(n.force);
+        String mu = Notation.sym(n.moment);
+        String w = Notation.sym(n.distributed);
+        List<List<String>> rows = new java.util.ArrayList<>();
+        double[] starts = m.elementStarts();
+        double[] ends = m.elementEnds();
+        for (int e = 0; e < m.elements() && rows.size() < ROWS; e++) {
+            double length = ends[e] - starts[e];
+            double q0 = element.q0()[e];
+            double q1 = element.q1()[e];
+            if (q0 == 0 && q1 == 0) {
+                continue;
+            }
+            double[] eq = CaseSolver.equivalentLoads(length, q0, q1);
+            rows.add(List.of(Integer.toString(e + 1), fmt(n.x(starts[e])) + " to " + fmt(n.x(ends[e])), fmt(n.w(q0)), fmt(n.w(q0 + q1 * length)),
+                    fmt(n.f(eq[0])), fmt(n.m(eq[1])), fmt(n.f(eq[2])), fmt(n.m(eq[3]))));
+        }
+        Derivation.Table equivalent = new Derivation.Table("Work-equivalent nodal loads of the loaded elements (up and counter-clockwise positive)",
+                List.of("Element", "x (" + n.xu() + ")", "q start (" + w + ")", "q end (" + w + ")", "F1 (" + f + ")", "M1 (" + mu + ")",
+                        "F2 (" + f + ")", "M2 (" + mu + ")"), rows);
+        List<List<String>> nodes = new java.util.ArrayList<>();
+        Response r = combination.response();
+        double[] x = m.nodePositions();
+        String du = Notation.sym(n.deflection);
+        for (int i = 0; i < x.length && nodes.size() < ROWS; i++) {
+            nodes.add(List.of(Integer.toString(i + 1), fmt(n.x(x[i])), fmt(n.deflection.fromSi(r.deflection().at(x[i]))),
+                    org.beamfolio.units.Numbers.format(i == x.length - 1 ? r.slope().leftOf(x[i]) : r.slope().at(x[i]))));
+        }
+        Derivation.Table displacements = new Derivation.Table("Solved nodal displacements (deflection down positive, rotation counter-clockwise)",
+                List.of("Node", "x (" + n.xu() + ")", "deflection (" + du + ")", "rotation (rad)"), nodes);
+        return List.of(equivalent, displacements);
+    }
+
+    private static String fmt(double v) {
+        return org.beamfolio.units.Numbers.format(v);
     }
 }

@@ -48,7 +48,7 @@ final class CombinationPart {
             }
             sheets.add(new ReportModel.CombinationSheet(id, c.name(), governs(c), reactions(c.response()), equilibrium(c),
                     figures(id, c), keyPoints(c.response()), d.method(), numbered,
-                    new ReportModel.Table(d.tableHeader(), d.table()), d.tableTitle()));
+                    d.tables().stream().map(t -> new ReportModel.TitledTable(t.title(), new ReportModel.Table(t.header(), t.rows()))).toList()));
         }
         return sheets;
     }

@@ -35,7 +35,9 @@ public record ReportModel(Sheet sheet, Cover cover, Revision revision, Basis bas
 
     public record CombinationSheet(String anchor, String name, String governs, Table reactions, List<Equation> equilibrium,
                                    List<Figure> figures, Table keyPoints, String method, List<NumberedStep> steps,
-                                   Table areaMethod, String areaMethodTitle) {}
+                                   List<TitledTable> workTables) {}
+
+    public record TitledTable(String title, Table table) {}
 
     /** A derivation step as printed: its number, what it finds, the working and the steps it draws on. */
     public record NumberedStep(String number, String statement, String symbolic, String substituted, String result,

@@ -159,7 +159,23 @@ class DerivationTest {
         Step zero = d.steps().stream().filter(s -> s.statement().startsWith("Point of zero shear")).findFirst().orElseThrow();
         assertEquals(3.0, zero.value(), 1e-12);
         assertTrue(zero.substituted().contains("30 [kN] / 10 [kN/m]"), zero.substituted());
-        assertTrue(d.table().size() >= 2, "the area-method table has a row per stretch");
+        Derivation.Table area = d.tables().get(d.tables().size() - 1);
+        assertTrue(area.title().contains("area method"));
+        assertTrue(area.rows().size() >= 2, "the area-method table has a row per stretch");
+    }
+
+    @Test
+    void theStiffnessMethodShowsItsNodalLoadsAndDisplacements() {
+        // a spring support: no hand method applies; the equivalent nodal loads of a uniform load
+        // on an element of length l are w l / 2 and w l^2 / 12 at each end (cubic Hermite element, common practice)
+        AnalysisResult r = TestJobs.solve(TestJobs.text("6 m", "    - { at: 0 m, type: pin }\n    - { at: 3 m, type: spring, k: 900 kN/m }\n"
+                + "    - { at: 6 m, type: roller }\n", "  - { case: D, type: uniform, w: 10 kN/m }\n"));
+        Derivation d = Derivations.of(r, r.combinations().get(0));
+        assertEquals(3, d.tables().size());
+        Derivation.Table loads = d.tables().get(0);
+        assertEquals(List.of("1", "0 to 3", "10", "10", "-15", "-7.5", "-15", "7.5"), loads.rows().get(0), "w l / 2 = 15 kN, w l^2 / 12 = 7.5 kN*m");
+        Derivation.Table nodes = d.tables().get(1);
+        assertEquals("0", nodes.rows().get(0).get(2), "no deflection at the pin");
     }
 
     @Test
