@@ -2,7 +2,6 @@ package org.beamfolio.derivation;
 
 import java.util.List;
 import org.beamfolio.analysis.AnalysisResult;
-import org.beamfolio.analysis.CombinationResult;
 import org.beamfolio.model.Load;
 import org.beamfolio.model.Support;
 
@@ -13,7 +12,7 @@ final class CantileverDerivation {
     private final Notation n;
     private final Steps steps;
 
-    CantileverDerivation(AnalysisResult result, CombinationResult combination, List<Load> loads, Notation n, Steps steps) {
+    CantileverDerivation(AnalysisResult result, List<Load> loads, Notation n, Steps steps) {
         this.result = result;
         this.terms = new LoadTerms(loads, n);
         this.n = n;

@@ -81,9 +81,9 @@ public final class Derivations {
         Method method = methodFor(result);
         List<Derivation.Table> tables = new java.util.ArrayList<>();
         String title = switch (method) {
-            case STATICS -> new StaticsDerivation(result, combination, loads, n, steps).write();
-            case CANTILEVER -> new CantileverDerivation(result, combination, loads, n, steps).write();
-            case THREE_MOMENT -> new ThreeMomentDerivation(result, combination, loads, n, steps).write();
+            case STATICS -> new StaticsDerivation(result, loads, n, steps).write();
+            case CANTILEVER -> new CantileverDerivation(result, loads, n, steps).write();
+            case THREE_MOMENT -> new ThreeMomentDerivation(result, loads, n, steps).write();
             case STIFFNESS -> {
                 StiffnessDerivation stiffness = new StiffnessDerivation(result, combination, loads, n, steps);
                 String written = stiffness.write();

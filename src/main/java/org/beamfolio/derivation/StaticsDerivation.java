@@ -2,7 +2,6 @@ package org.beamfolio.derivation;
 
 import java.util.List;
 import org.beamfolio.analysis.AnalysisResult;
-import org.beamfolio.analysis.CombinationResult;
 import org.beamfolio.model.Load;
 import org.beamfolio.model.Support;
 
@@ -13,14 +12,12 @@ import org.beamfolio.model.Support;
  */
 final class StaticsDerivation {
     private final AnalysisResult result;
-    private final CombinationResult combination;
     private final LoadTerms terms;
     private final Notation n;
     private final Steps steps;
 
-    StaticsDerivation(AnalysisResult result, CombinationResult combination, List<Load> loads, Notation n, Steps steps) {
+    StaticsDerivation(AnalysisResult result, List<Load> loads, Notation n, Steps steps) {
         this.result = result;
-        this.combination = combination;
         this.terms = new LoadTerms(loads, n);
         this.n = n;
         this.steps = steps;

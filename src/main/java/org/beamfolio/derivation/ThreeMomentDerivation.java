@@ -7,7 +7,6 @@ import org.apache.commons.math3.linear.ArrayRealVector;
 import org.apache.commons.math3.linear.LUDecomposition;
 import org.apache.commons.math3.linear.RealVector;
 import org.beamfolio.analysis.AnalysisResult;
-import org.beamfolio.analysis.CombinationResult;
 import org.beamfolio.analysis.Spans;
 import org.beamfolio.model.Load;
 import org.beamfolio.model.Support;
@@ -29,7 +28,7 @@ final class ThreeMomentDerivation {
     private final Notation n;
     private final Steps steps;
 
-    ThreeMomentDerivation(AnalysisResult result, CombinationResult combination, List<Load> loads, Notation n, Steps steps) {
+    ThreeMomentDerivation(AnalysisResult result, List<Load> loads, Notation n, Steps steps) {
         this.result = result;
         this.loads = loads;
         this.n = n;
@@ -78,12 +77,12 @@ final class ThreeMomentDerivation {
                 known[j] = 0.0;
             }
         }
-        if (!leftOverhang.isEmpty() || supports.get(0).at() > 0) {
+        if (supports.get(0).at() > 0) {
             known[0] = overhangMoment(leftOverhang, supports.get(0).at(), true);
             steps.add("Moment over the first support from the left overhang (statics of the overhang)", "M_1 = −Σ[F (x_1 − x) ] − ΣM_ccw",
                     "M_1 = " + Steps.n(n.m(known[0]), n.mu()), n.m(known[0]), n.mu(), "statics of the overhang");
         }
-        if (!rightOverhang.isEmpty() || supports.get(count - 1).at() < length) {
+        if (supports.get(count - 1).at() < length) {
             known[count - 1] = overhangMoment(rightOverhang, supports.get(count - 1).at(), false);
             steps.add("Moment over the last support from the right overhang (statics of the overhang)", "M_n = −Σ[F (x − x_n)] + ΣM_ccw",
                     "M_n = " + Steps.n(n.m(known[count - 1]), n.mu()), n.m(known[count - 1]), n.mu(), "statics of the overhang");

@@ -43,7 +43,7 @@ class DerivationTest {
         AnalysisResult r = TestJobs.solve(TestJobs.text("6 m", supports, LOADS));
         assertEquals(Derivations.Method.THREE_MOMENT, Derivations.methodFor(r));
         CombinationResult c = r.combinations().get(0);
-        ThreeMomentDerivation d = new ThreeMomentDerivation(r, c, FactoredLoads.of(r, c), new Notation(r), new Steps());
+        ThreeMomentDerivation d = new ThreeMomentDerivation(r, FactoredLoads.of(r, c), new Notation(r), new Steps());
         d.write();
         double scale = Math.abs(c.response().moment().min().value()) + Math.abs(c.response().moment().max().value());
         double forceScale = c.response().shear().max().value() - c.response().shear().min().value();
@@ -67,7 +67,7 @@ class DerivationTest {
                 "    - { at: 0 m, type: pin }\n    - { at: 3 m, type: roller }\n    - { at: 6 m, type: roller }\n",
                 "  - { case: D, type: uniform, w: 10 kN/m }\n"));
         CombinationResult c = r.combinations().get(0);
-        ThreeMomentDerivation d = new ThreeMomentDerivation(r, c, FactoredLoads.of(r, c), new Notation(r), new Steps());
+        ThreeMomentDerivation d = new ThreeMomentDerivation(r, FactoredLoads.of(r, c), new Notation(r), new Steps());
         d.write();
         assertEquals(-10e3 * 9 / 8, d.solution().supportMoments()[1], 1e-9 * 10e3);
     }
