@@ -12,7 +12,12 @@ import java.io.UncheckedIOException;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.CompletionException;
+import java.util.concurrent.Executor;
 import org.beamfolio.analysis.AnalysisResult;
+import org.beamfolio.report.drawing.Chart;
+import org.beamfolio.report.drawing.Drawing;
 import org.beamfolio.report.pdf.PdfRenderer;
 import org.beamfolio.results.CheckOutcome;
 
@@ -24,12 +29,35 @@ import org.beamfolio.results.CheckOutcome;
  */
 public final class PackageRenderer {
     static final String TEMPLATE = "package.ftlx";
+    static final String STYLE = "package.css";
 
-    private final Configuration templates;
-    private final PdfRenderer pdf = new PdfRenderer();
+    private final CompletableFuture<Configuration> templates;
+    private final CompletableFuture<PdfRenderer> pdf;
 
+    /**
+     * Starts setting up the templates and then the PDF stack on a thread of their own and
+     * returns at once: setting them up is a large share of a one-job run, and it overlaps with
+     * the caller reading and solving the job. The first package waits for what is not ready.
+     */
     public PackageRenderer() {
-        templates = new Configuration(Configuration.VERSION_2_3_34);
+        Executor ownThread = task -> {
+            Thread thread = new Thread(task, "beamfolio-report-setup");
+            thread.setDaemon(true);
+            thread.start();
+        };
+        templates = CompletableFuture.supplyAsync(PackageRenderer::configuration, ownThread);
+        pdf = templates.thenApply(ready -> new PdfRenderer(rehearsal()));
+    }
+
+    /** A small diagram of the kind every package draws, drawn once while setting up. */
+    private static Drawing rehearsal() {
+        double[] x = {0, 1, 2};
+        return new Chart("M", "x", List.of(new Chart.Series("M", x, new double[] {0, 1, 0})),
+                List.of(new Chart.Mark(1, 1, "1")), false);
+    }
+
+    private static Configuration configuration() {
+        Configuration templates = new Configuration(Configuration.VERSION_2_3_34);
         templates.setTemplateLoader(new ClassTemplateLoader(PackageRenderer.class, "/report-templates"));
         templates.setOutputFormat(XHTMLOutputFormat.INSTANCE);
         templates.setDefaultEncoding("UTF-8");
@@ -37,6 +65,28 @@ public final class PackageRenderer {
         templates.setLogTemplateExceptions(false);
         templates.setFallbackOnNullLoopVariable(false);
         templates.setLocale(Locale.US);
+        try {
+            // parsed now and cached by the configuration
+            templates.getTemplate(TEMPLATE);
+            templates.getTemplate(STYLE);
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+        return templates;
+    }
+
+    private static <T> T ready(CompletableFuture<T> part) {
+        try {
+            return part.join();
+        } catch (CompletionException e) {
+            if (e.getCause() instanceof RuntimeException r) {
+                throw r;
+            }
+            if (e.getCause() instanceof Error error) {
+                throw error;
+            }
+            throw e;
+        }
     }
 
     /** The XHTML of the package, before layout (what the golden tests compare). */
@@ -46,7 +96,7 @@ public final class PackageRenderer {
 
     private String xhtml(ReportModel model) {
         try {
-            Template template = templates.getTemplate(TEMPLATE);
+            Template template = ready(templates).getTemplate(TEMPLATE);
             StringWriter out = new StringWriter();
             template.process(Map.of("r", model), out);
             return out.toString();
@@ -73,6 +123,6 @@ public final class PackageRenderer {
         String xhtml = xhtml(built.model());
         PdfRenderer.Attachment job = new PdfRenderer.Attachment(result.job().name() + ".yaml",
                 result.job().sourceBytes(), "Job file of this calculation package");
-        return pdf.render(xhtml, built.drawings(), job, result.job().project().date(), archival, result.job().project().title());
+        return ready(pdf).render(xhtml, built.drawings(), job, result.job().project().date(), archival, result.job().project().title());
     }
 }

@@ -1,12 +1,21 @@
 package org.beamfolio.report.pdf;
 
-import com.lowagie.text.pdf.BaseFont;
+import com.lowagie.text.pdf.PdfContentByte;
 import com.lowagie.text.pdf.PdfDate;
+import com.lowagie.text.pdf.PdfTemplate;
 import com.lowagie.text.pdf.PdfFileSpecification;
 import com.lowagie.text.pdf.PdfName;
 import com.lowagie.text.pdf.PdfWriter;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
+import java.io.StringReader;
+import javax.xml.XMLConstants;
+import javax.xml.parsers.DocumentBuilder;
+import javax.xml.parsers.DocumentBuilderFactory;
+import javax.xml.parsers.ParserConfigurationException;
+import org.w3c.dom.Document;
+import org.xml.sax.InputSource;
+import org.xml.sax.SAXException;
 import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 import java.security.MessageDigest;
@@ -33,6 +42,36 @@ public final class PdfRenderer {
     private static final Pattern ID = Pattern.compile("/ID\\s*\\[\\s*<([0-9a-fA-F]+)>\\s*<([0-9a-fA-F]+)>\\s*\\]");
 
     private final EmbeddedFonts fonts = new EmbeddedFonts();
+    private final DocumentBuilder parser = xhtmlParser();
+
+    public PdfRenderer() {}
+
+    /**
+     * A renderer that has drawn {@code rehearsal} once into a throwaway page, so the platform's
+     * font manager, the PDF writer and the drawing code are loaded and initialised before the
+     * first package needs them: done while the job is still being read and solved, that takes
+     * them off the time a one-job build waits for.
+     */
+    public PdfRenderer(Drawing rehearsal) {
+        try {
+            com.lowagie.text.Document page = new com.lowagie.text.Document();
+            PdfWriter writer = PdfWriter.getInstance(page, java.io.OutputStream.nullOutputStream());
+            page.open();
+            PdfContentByte content = writer.getDirectContent();
+            PdfTemplate figure = content.createTemplate(200, 100);
+            java.awt.Graphics2D g = figure.createGraphics(200, 100, fonts);
+            try {
+                rehearsal.draw(g, 200, 100);
+            } finally {
+                g.dispose();
+            }
+            content.addTemplate(figure, 0, 0);
+            page.close();
+            parse("<html xmlns=\"http://www.w3.org/1999/xhtml\"><body><p>-</p></body></html>");
+        } catch (com.lowagie.text.DocumentException e) {
+            throw new IllegalStateException("the PDF writer failed on a blank page: " + e.getMessage(), e);
+        }
+    }
 
     /** The job file as it travels inside the package. */
     public record Attachment(String fileName, byte[] bytes, String description) {}
@@ -53,16 +92,8 @@ public final class PdfRenderer {
     public byte[] render(String xhtml, Map<String, Drawing> drawings, Attachment attachment, String isoDate, boolean archival,
                          String title) {
         try {
-            ITextRenderer renderer = new ITextRenderer();
-            BaseFont[] documentFonts = fonts.forDocument();
-            SecureRandom prefixes = seeded(xhtml);
-            for (int i = 0; i < documentFonts.length; i++) {
-                documentFonts[i].setSecureRandom(prefixes);
-                // PDF/A-2 and later forbid an incomplete CIDSet; none is simplest
-                documentFonts[i].setIncludeCidSet(false);
-                renderer.getFontResolver().addFont(documentFonts[i], EmbeddedFonts.FILES[i], null);
-            }
-            fonts.use(documentFonts);
+            ITextRenderer renderer = new ITextRenderer(fonts.resolver());
+            fonts.prefixesFrom(seeded(xhtml));
             renderer.getSharedContext().setReplacedElementFactory(
                     new VectorElementFactory(renderer.getSharedContext().getReplacedElementFactory(), drawings, fonts));
             Calendar date = calendar(isoDate);
@@ -90,13 +121,41 @@ public final class PdfRenderer {
             if (archival) {
                 renderer.setPDFVersion(PdfWriter.VERSION_1_7);
             }
-            renderer.setDocumentFromString(xhtml);
+            renderer.setDocument(parse(xhtml), null);
             renderer.layout();
             ByteArrayOutputStream out = new ByteArrayOutputStream();
             renderer.createPDF(out);
             return withContentId(out.toByteArray());
         } catch (com.lowagie.text.DocumentException e) {
             throw new IllegalStateException("PDF layout failed: " + e.getMessage(), e);
+        }
+    }
+
+    /**
+     * A namespace-aware XML parser that reads no external entity or DTD. The renderer's own
+     * string entry point builds the same tree through an identity XSLT transform, which costs a
+     * cold start the loading of a whole XSLT compiler.
+     */
+    private static DocumentBuilder xhtmlParser() {
+        try {
+            DocumentBuilderFactory factory = DocumentBuilderFactory.newInstance();
+            factory.setNamespaceAware(true);
+            factory.setFeature(XMLConstants.FEATURE_SECURE_PROCESSING, true);
+            factory.setAttribute(XMLConstants.ACCESS_EXTERNAL_DTD, "");
+            factory.setAttribute(XMLConstants.ACCESS_EXTERNAL_SCHEMA, "");
+            factory.setExpandEntityReferences(false);
+            return factory.newDocumentBuilder();
+        } catch (ParserConfigurationException e) {
+            throw new IllegalStateException("the platform's XML parser cannot be configured", e);
+        }
+    }
+
+    private Document parse(String xhtml) {
+        try {
+            parser.reset();
+            return parser.parse(new InputSource(new StringReader(xhtml)));
+        } catch (SAXException | IOException e) {
+            throw new IllegalStateException("the package's XHTML is not well formed: " + e.getMessage(), e);
         }
     }
 
