@@ -83,14 +83,42 @@ public final class Analysis {
     }
 
     static Response combine(StructureModel model, Map<String, Response> cases, Map<String, Double> factors, String name) {
-        Response sum = Response.zero(name, model.supports().size(), model.elementStarts(), model.elementEnds());
-        for (Map.Entry<String, Double> f : factors.entrySet()) {
-            Response r = cases.get(f.getKey());
-            if (r != null && f.getValue() != 0) {
-                sum = sum.plusTimes(r, f.getValue(), name);
-            }
+        return new Terms(factors.size()).addCases(cases, factors).sum(model, name);
+    }
+
+    /** The factored responses of a combination, summed at the end in one pass per field. */
+    private static final class Terms {
+        private Response[] responses;
+        private double[] factors;
+        private int count;
+
+        Terms(int capacity) {
+            responses = new Response[Math.max(capacity, 1)];
+            factors = new double[responses.length];
         }
-        return sum;
+
+        Terms addCases(Map<String, Response> cases, Map<String, Double> caseFactors) {
+            for (Map.Entry<String, Double> f : caseFactors.entrySet()) {
+                Response r = cases.get(f.getKey());
+                if (r != null && f.getValue() != 0) {
+                    add(r, f.getValue());
+                }
+            }
+            return this;
+        }
+
+        void add(Response r, double factor) {
+            if (count == responses.length) {
+                responses = java.util.Arrays.copyOf(responses, 2 * count);
+                factors = java.util.Arrays.copyOf(factors, 2 * count);
+            }
+            responses[count] = r;
+            factors[count++] = factor;
+        }
+
+        Response sum(StructureModel model, String name) {
+            return Response.linear(name, responses, factors, count, model.supports().size(), model.elementStarts(), model.elementEnds());
+        }
     }
 
     /**
@@ -125,15 +153,16 @@ public final class Analysis {
             for (boolean[] loaded : arrangements) {
                 String arrangement = describe(spans, loaded);
                 String name = combination.name() + " (" + String.join(", ", job.pattern()) + " on " + arrangement + ")";
-                Response r = combine(model, cases, fixed, name);
+                Terms terms = new Terms(fixed.size() + loaded.length).addCases(cases, fixed);
                 for (String p : job.pattern()) {
                     double factor = combination.factors().getOrDefault(p, 0.0);
                     for (int i = 0; i < loaded.length; i++) {
                         if (loaded[i] && factor != 0) {
-                            r = r.plusTimes(shares.get(p)[i], factor, name);
+                            terms.add(shares.get(p)[i], factor);
                         }
                     }
                 }
+                Response r = terms.sum(model, name);
                 List<Integer> regions = new ArrayList<>();
                 for (int i = 0; i < loaded.length; i++) {
                     if (loaded[i]) {

@@ -143,10 +143,12 @@ public final class CaseSolver {
         // Shear and moment by statics, marching from the left end with the reactions: the internal
         // forces then balance the loads exactly, even where a short stiff element makes its own end
         // forces (k d) lose digits to cancellation.
-        Polynomial[] shear = new Polynomial[elements];
-        Polynomial[] moment = new Polynomial[elements];
-        Polynomial[] slope = new Polynomial[elements];
-        Polynomial[] deflection = new Polynomial[elements];
+        // Flat coefficients, six to an element, integrated term by term as Polynomial.integral does.
+        int stride = Field.STRIDE;
+        double[] shear = new double[elements * stride];
+        double[] moment = new double[elements * stride];
+        double[] slope = new double[elements * stride];
+        double[] deflection = new double[elements * stride];
         double v = 0;
         double mo = 0;
         for (int e = 0; e < elements; e++) {
@@ -154,19 +156,42 @@ public final class CaseSolver {
             mo -= nodeReactionMoment[e] + loads.nodalCouple()[e];
             double length = m.x[e + 1] - m.x[e];
             int[] dofs = dofs(m, e);
-            Polynomial q = Polynomial.of(loads.q0()[e], loads.q1()[e]);
-            shear[e] = q.integral(0).times(-1).plus(Polynomial.of(v));
-            moment[e] = shear[e].integral(mo);
-            slope[e] = moment[e].times(1 / m.ei[e]).integral(d[dofs[1]]);
-            deflection[e] = slope[e].integral(d[dofs[0]]).times(-1);
-            v = shear[e].at(length);
-            mo = moment[e].at(length);
+            int b = e * stride;
+            // V = v - (q0 s + q1 s^2 / 2)
+            shear[b] = -0.0 + v;
+            shear[b + 1] = -loads.q0()[e] + 0.0;
+            shear[b + 2] = -(loads.q1()[e] / 2) + 0.0;
+            // M = mo + integral of V
+            moment[b] = mo;
+            for (int k = 0; k < 3; k++) {
+                moment[b + k + 1] = shear[b + k] / (k + 1);
+            }
+            // slope = theta_left + integral of M / EI
+            double flexibility = 1 / m.ei[e];
+            slope[b] = d[dofs[1]];
+            for (int k = 0; k < 4; k++) {
+                slope[b + k + 1] = moment[b + k] * flexibility / (k + 1);
+            }
+            // deflection (downward positive) = -(v_left + integral of slope)
+            deflection[b] = d[dofs[0]] * -1;
+            for (int k = 0; k < 5; k++) {
+                deflection[b + k + 1] = slope[b + k] / (k + 1) * -1;
+            }
+            v = horner(shear, b, 2, length);
+            mo = horner(moment, b, 3, length);
         }
         double[] starts = m.elementStarts();
         double[] ends = m.elementEnds();
-        return new Response(name, reactionForce, reactionMoment, new Field(starts, ends, shear),
-                new Field(starts, ends, moment), new Field(starts, ends, slope), new Field(starts, ends, deflection),
-                pivotRatio);
+        return new Response(name, reactionForce, reactionMoment, Field.of(starts, ends, shear), Field.of(starts, ends, moment),
+                Field.of(starts, ends, slope), Field.of(starts, ends, deflection), pivotRatio);
+    }
+
+    private static double horner(double[] c, int base, int degree, double s) {
+        double value = 0;
+        for (int k = degree; k >= 0; k--) {
+            value = value * s + c[base + k];
+        }
+        return value;
     }
 
     /**
@@ -236,16 +261,31 @@ public final class CaseSolver {
      * q0 + q1 s: minus the integral of each Hermite shape function times q.
      */
     public static double[] equivalentLoads(double l, double q0, double q1) {
-        Polynomial q = Polynomial.of(q0, q1);
-        Polynomial[] shape = {
-            Polynomial.of(1, 0, -3 / (l * l), 2 / (l * l * l)),
-            Polynomial.of(0, 1, -2 / l, 1 / (l * l)),
-            Polynomial.of(0, 0, 3 / (l * l), -2 / (l * l * l)),
-            Polynomial.of(0, 0, -1 / l, 1 / (l * l))
+        if (q0 == 0 && q1 == 0) {
+            return new double[] {-0.0, -0.0, -0.0, -0.0};
+        }
+        double[][] shape = {
+            {1, 0, -3 / (l * l), 2 / (l * l * l)},
+            {0, 1, -2 / l, 1 / (l * l)},
+            {0, 0, 3 / (l * l), -2 / (l * l * l)},
+            {0, 0, -1 / l, 1 / (l * l)}
         };
+        double[] q = q1 != 0 ? new double[] {q0, q1} : new double[] {q0};
         double[] result = new double[4];
+        double[] product = new double[5];
         for (int i = 0; i < 4; i++) {
-            result[i] = -shape[i].times(q).integrate(l);
+            java.util.Arrays.fill(product, 0.0);
+            for (int a = 0; a < 4; a++) {
+                for (int j = 0; j < q.length; j++) {
+                    product[a + j] = product[a + j] + shape[i][a] * q[j];
+                }
+            }
+            // the integral of N_i q from 0 to l, by Horner's rule on its antiderivative
+            double value = 0;
+            for (int k = product.length - 1; k >= 0; k--) {
+                value = value * l + product[k] / (k + 1);
+            }
+            result[i] = -(value * l + 0.0);
         }
         return result;
     }

@@ -1,7 +1,5 @@
 package org.beamfolio.analysis;
 
-import java.util.List;
-
 /**
  * A field along the beam (shear, moment, slope, deflection, a stress) as polynomial pieces, one
  * per element, each in the local coordinate s = x - start. Jumps between pieces are kept: the
@@ -29,6 +27,14 @@ public final class Field {
                 c[i * STRIDE + k] = pieces[i].coefficient(k);
             }
         }
+    }
+
+    /** A field of flat coefficients, six to a piece; the coefficient array becomes the field's own. */
+    static Field of(double[] starts, double[] ends, double[] coefficients) {
+        if (coefficients.length != starts.length * STRIDE) {
+            throw new IllegalArgumentException("six coefficients a piece");
+        }
+        return new Field(starts.clone(), ends.clone(), coefficients);
     }
 
     /** Shares the abscissae of another field: they never change. */
@@ -122,6 +128,23 @@ public final class Field {
         return new Field(starts, ends, r);
     }
 
+    /**
+     * The sum of factors[t] * fields[t] in one pass, the terms added in order, so each
+     * coefficient is the same sum as adding the terms one by one; one array, not one per term.
+     * Every field must share this one's pieces.
+     */
+    Field linear(Field[] fields, double[] factors, int count) {
+        double[] r = new double[c.length];
+        for (int t = 0; t < count; t++) {
+            double k = factors[t];
+            double[] o = fields[t].c;
+            for (int i = 0; i < r.length; i++) {
+                r[i] = r[i] + k * o[i];
+            }
+        }
+        return new Field(starts, ends, r);
+    }
+
     /** The same pieces, each scaled by its own factor (a stress from a moment, segment by segment). */
     public Field scaledBy(double[] factors) {
         double[] r = new double[c.length];
@@ -155,25 +178,37 @@ public final class Field {
 
     /** Where a piece can take its extremes: its two ends and the real roots of its derivative (local s). */
     public double[] candidates(int piece) {
+        double[] points = new double[CANDIDATES];
+        return java.util.Arrays.copyOf(points, candidates(piece, points));
+    }
+
+    /** Room for the candidates of any piece: two ends and up to five roots. */
+    static final int CANDIDATES = STRIDE + 1;
+
+    /**
+     * The candidates of a piece written to {@code points} (at least {@link #CANDIDATES} long):
+     * the start, the end, then the roots in ascending order. Returns how many.
+     */
+    int candidates(int piece, double[] points) {
         double length = ends[piece] - starts[piece];
         int base = piece * STRIDE;
-        double[] d = new double[STRIDE - 1];
+        points[0] = 0;
+        points[1] = length;
         boolean constant = true;
         for (int k = 1; k < STRIDE; k++) {
-            d[k - 1] = k * c[base + k];
-            constant &= d[k - 1] == 0;
+            constant &= c[base + k] == 0;
         }
         if (constant) {
-            return new double[] {0, length};
+            return 2;
         }
-        List<Double> roots = Roots.in(Polynomial.of(d), 0, length);
-        double[] out = new double[roots.size() + 2];
-        out[0] = 0;
-        out[1] = length;
-        for (int i = 0; i < roots.size(); i++) {
-            out[i + 2] = roots.get(i);
+        double[] d = new double[STRIDE - 1];
+        for (int k = 1; k < STRIDE; k++) {
+            d[k - 1] = k * c[base + k];
         }
-        return out;
+        double[] roots = new double[STRIDE];
+        int count = Roots.in(d, 0, length, roots);
+        System.arraycopy(roots, 0, points, 2, count);
+        return count + 2;
     }
 
     /**

@@ -44,6 +44,39 @@ public record Response(String name, double[] reactionForce, double[] reactionMom
         return new Response(newName, rf, rm, shear.times(k), moment.times(k), slope.times(k), deflection.times(k), pivotRatio);
     }
 
+    /**
+     * The sum of factors[t] * terms[t] (the first {@code count} of them) in one pass per field,
+     * added in order: the same numbers as adding the terms one by one to a zero response.
+     */
+    static Response linear(String name, Response[] terms, double[] factors, int count, int supports, double[] starts, double[] ends) {
+        if (count == 0) {
+            return zero(name, supports, starts, ends);
+        }
+        double[] rf = new double[supports];
+        double[] rm = new double[supports];
+        double pivot = 1.0;
+        Field[] v = new Field[count];
+        Field[] m = new Field[count];
+        Field[] theta = new Field[count];
+        Field[] d = new Field[count];
+        for (int t = 0; t < count; t++) {
+            Response r = terms[t];
+            double k = factors[t];
+            for (int i = 0; i < supports; i++) {
+                rf[i] = rf[i] + k * r.reactionForce[i];
+                rm[i] = rm[i] + k * r.reactionMoment[i];
+            }
+            pivot = Math.min(pivot, r.pivotRatio);
+            v[t] = r.shear;
+            m[t] = r.moment;
+            theta[t] = r.slope;
+            d[t] = r.deflection;
+        }
+        Field first = terms[0].shear;
+        return new Response(name, rf, rm, first.linear(v, factors, count), first.linear(m, factors, count),
+                first.linear(theta, factors, count), first.linear(d, factors, count), pivot);
+    }
+
     public static Response zero(String name, int supports, double[] starts, double[] ends) {
         Field z = Field.zero(starts, ends);
         return new Response(name, new double[supports], new double[supports], z, z, z, z, 1.0);

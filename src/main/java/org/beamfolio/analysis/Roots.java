@@ -12,80 +12,126 @@ public final class Roots {
     private Roots() {}
 
     public static List<Double> in(Polynomial p, double a, double b) {
-        List<Double> roots = new ArrayList<>();
-        if (p.degree() == 0 || clearOfZero(p, a, b)) {
-            return roots;
+        double[] c = new double[p.degree() + 1];
+        for (int k = 0; k < c.length; k++) {
+            c[k] = p.coefficient(k);
         }
-        if (p.degree() == 1) {
-            add(roots, -p.coefficient(0) / p.coefficient(1), a, b);
-            return roots;
-        }
-        if (p.degree() == 2) {
-            quadratic(p.coefficient(2), p.coefficient(1), p.coefficient(0), a, b, roots);
-            return roots;
-        }
-        List<Double> breaks = new ArrayList<>();
-        breaks.add(a);
-        breaks.addAll(in(p.derivative(), a, b));
-        breaks.add(b);
-        for (int i = 0; i + 1 < breaks.size(); i++) {
-            double lo = breaks.get(i);
-            double hi = breaks.get(i + 1);
-            double flo = p.at(lo);
-            double fhi = p.at(hi);
-            if (flo == 0) {
-                addDistinct(roots, lo);
-            } else if (fhi != 0 && Math.signum(flo) != Math.signum(fhi)) {
-                addDistinct(roots, bisect(p, lo, hi, flo));
-            }
-            if (fhi == 0 && i + 2 == breaks.size()) {
-                addDistinct(roots, hi);
-            }
+        double[] found = new double[c.length];
+        int n = in(c, a, b, found);
+        List<Double> roots = new ArrayList<>(n);
+        for (int i = 0; i < n; i++) {
+            roots.add(found[i]);
         }
         return roots;
+    }
+
+    /**
+     * The same on coefficients {@code c} (c0 first; trailing zeros allowed), without objects: the
+     * roots go to {@code out} in ascending order (room for one more than the degree) and their count
+     * is returned. Solvers call this for every piece of every combination.
+     */
+    static int in(double[] c, double a, double b, double[] out) {
+        int degree = c.length - 1;
+        while (degree > 0 && c[degree] == 0) {
+            degree--;
+        }
+        return in(c, degree, a, b, out);
+    }
+
+    private static int in(double[] c, int degree, double a, double b, double[] out) {
+        if (degree == 0 || clearOfZero(c, degree, a, b)) {
+            return 0;
+        }
+        if (degree == 1) {
+            return add(out, 0, -c[0] / c[1], a, b);
+        }
+        if (degree == 2) {
+            return quadratic(c[2], c[1], c[0], a, b, out);
+        }
+        double[] slope = derivative(c, degree);
+        double[] breaks = new double[degree + 2];
+        breaks[0] = a;
+        double[] innerRoots = new double[degree];
+        int inner = in(slope, degree - 1, a, b, innerRoots);
+        System.arraycopy(innerRoots, 0, breaks, 1, inner);
+        breaks[inner + 1] = b;
+        int size = inner + 2;
+        int count = 0;
+        for (int i = 0; i + 1 < size; i++) {
+            double lo = breaks[i];
+            double hi = breaks[i + 1];
+            double flo = at(c, degree, lo);
+            double fhi = at(c, degree, hi);
+            if (flo == 0) {
+                count = addDistinct(out, count, lo);
+            } else if (fhi != 0 && Math.signum(flo) != Math.signum(fhi)) {
+                count = addDistinct(out, count, bisect(c, degree, slope, lo, hi, flo));
+            }
+            if (fhi == 0 && i + 2 == size) {
+                count = addDistinct(out, count, hi);
+            }
+        }
+        return count;
+    }
+
+    private static double[] derivative(double[] c, int degree) {
+        double[] d = new double[degree];
+        for (int k = 1; k <= degree; k++) {
+            d[k - 1] = k * c[k];
+        }
+        return d;
+    }
+
+    /** Horner's rule on c[0..degree]. */
+    private static double at(double[] c, int degree, double s) {
+        double v = 0;
+        for (int i = degree; i >= 0; i--) {
+            v = v * s + c[i];
+        }
+        return v;
     }
 
     /**
      * True when |p| cannot reach zero on [a, b]: |c0| exceeds the sum of |c_k| m^k over k >= 1,
      * m the larger of |a| and |b|. Most pieces of a beam field are settled by this test alone.
      */
-    private static boolean clearOfZero(Polynomial p, double a, double b) {
+    private static boolean clearOfZero(double[] c, int degree, double a, double b) {
         double m = Math.max(Math.abs(a), Math.abs(b));
         double bound = 0;
         double power = 1;
-        for (int k = 1; k <= p.degree(); k++) {
+        for (int k = 1; k <= degree; k++) {
             power *= m;
-            bound += Math.abs(p.coefficient(k)) * power;
+            bound += Math.abs(c[k]) * power;
         }
-        return Math.abs(p.coefficient(0)) > bound * (1 + 1e-12);
+        return Math.abs(c[0]) > bound * (1 + 1e-12);
     }
 
     /** Real roots of a x^2 + b x + c in [lo, hi], by the cancellation-free form of the formula. */
-    private static void quadratic(double a, double b, double c, double lo, double hi, List<Double> roots) {
+    private static int quadratic(double a, double b, double c, double lo, double hi, double[] roots) {
         double disc = b * b - 4 * a * c;
         if (disc < 0) {
-            return;
+            return 0;
         }
         double q = -0.5 * (b + Math.copySign(Math.sqrt(disc), b));
         double r1 = q / a;
         double r2 = q != 0 ? c / q : r1;
         double first = Math.min(r1, r2);
         double second = Math.max(r1, r2);
-        add(roots, first, lo, hi);
+        int count = add(roots, 0, first, lo, hi);
         if (second != first) {
-            add(roots, second, lo, hi);
+            count = add(roots, count, second, lo, hi);
         }
+        return count;
     }
 
     /**
      * A root in a bracket where the polynomial is monotone: Newton steps kept inside the
      * bracket, falling back to halving, until the bracket or the step vanishes.
      */
-    private static double bisect(Polynomial p, double lo, double hi, double flo) {
-        Polynomial dp = p.derivative();
+    private static double bisect(double[] c, int degree, double[] slope, double lo, double hi, double flo) {
         double x = 0.5 * (lo + hi);
         for (int i = 0; i < 200 && hi - lo > 0; i++) {
-            double fx = p.at(x);
+            double fx = at(c, degree, x);
             if (fx == 0) {
                 return x;
             }
@@ -95,8 +141,8 @@ public final class Roots {
             } else {
                 hi = x;
             }
-            double slope = dp.at(x);
-            double next = slope != 0 ? x - fx / slope : Double.NaN;
+            double gradient = at(slope, degree - 1, x);
+            double next = gradient != 0 ? x - fx / gradient : Double.NaN;
             if (!(next > lo && next < hi)) {
                 next = 0.5 * (lo + hi);
             }
@@ -111,15 +157,17 @@ public final class Roots {
         return x;
     }
 
-    private static void add(List<Double> roots, double r, double a, double b) {
+    private static int add(double[] roots, int count, double r, double a, double b) {
         if (r >= a && r <= b) {
-            roots.add(r);
+            roots[count++] = r;
         }
+        return count;
     }
 
-    private static void addDistinct(List<Double> roots, double r) {
-        if (roots.isEmpty() || roots.get(roots.size() - 1) != r) {
-            roots.add(r);
+    private static int addDistinct(double[] roots, int count, double r) {
+        if (count == 0 || roots[count - 1] != r) {
+            roots[count++] = r;
         }
+        return count;
     }
 }

@@ -48,32 +48,88 @@ public final class Stresses {
     }
 
     /**
-     * Every extreme of a response in one pass per field: the candidate points of the moment
-     * (its ends and the zeros of shear) serve the fibre stresses too, which are scaled moments.
+     * Every extreme of a response in one pass along the beam: the candidate points of the shear
+     * (its piece ends and stationary points) serve the shear stress too, and those of the moment
+     * the fibre stresses, which are scaled shears and moments. Nothing is allocated per piece.
      */
     Extremes extremes(Response r) {
         Field v = r.shear();
         Field m = r.moment();
         Field d = r.deflection();
-        int n = m.size();
-        double[][] vPoints = new double[n][];
-        double[][] mPoints = new double[n][];
-        for (int i = 0; i < n; i++) {
-            vPoints[i] = v.candidates(i);
-            mPoints[i] = m.candidates(i);
+        double x0 = m.start(0);
+        Range shearRange = new Range(x0);
+        Range momentRange = new Range(x0);
+        Range deflectionRange = new Range(x0);
+        Range topRange = new Range(x0);
+        Range bottomRange = new Range(x0);
+        Range tau = shear == null ? null : new Range(x0);
+        double[] points = new double[Field.CANDIDATES];
+        for (int i = 0; i < m.size(); i++) {
+            double start = m.start(i);
+            int count = v.candidates(i, points);
+            for (int k = 0; k < count; k++) {
+                double value = v.value(i, points[k]);
+                shearRange.offer(value, start + points[k]);
+                if (tau != null) {
+                    tau.offer(shear[i] * value, start + points[k]);
+                }
+            }
+            count = m.candidates(i, points);
+            for (int k = 0; k < count; k++) {
+                double value = m.value(i, points[k]);
+                momentRange.offer(value, start + points[k]);
+                topRange.offer(top[i] * value, start + points[k]);
+                bottomRange.offer(bottom[i] * value, start + points[k]);
+            }
+            count = d.candidates(i, points);
+            for (int k = 0; k < count; k++) {
+                deflectionRange.offer(d.value(i, points[k]), start + points[k]);
+            }
         }
-        Extreme[] shearRange = v.extremes(null, v, i -> vPoints[i]);
-        Extreme[] momentRange = m.extremes(null, m, i -> mPoints[i]);
-        Extreme[] deflectionRange = d.extremes(null, d, d::candidates);
-        Extreme[] topRange = m.extremes(top, m, i -> mPoints[i]);
-        Extreme[] bottomRange = m.extremes(bottom, m, i -> mPoints[i]);
         Extreme tauMax = null;
-        if (shear != null) {
-            Extreme[] tau = v.extremes(shear, v, i -> vPoints[i]);
-            Extreme larger = Math.abs(tau[1].value()) > Math.abs(tau[0].value()) ? tau[1] : tau[0];
+        if (tau != null) {
+            Extreme larger = Math.abs(tau.min().value()) > Math.abs(tau.max().value()) ? tau.min() : tau.max();
             tauMax = new Extreme(Math.abs(larger.value()), larger.at(), null);
         }
-        return new Extremes(shearRange[0], shearRange[1], momentRange[0], momentRange[1], deflectionRange[0], deflectionRange[1],
-                topRange[0], topRange[1], bottomRange[0], bottomRange[1], tauMax);
+        return new Extremes(shearRange.max(), shearRange.min(), momentRange.max(), momentRange.min(), deflectionRange.max(),
+                deflectionRange.min(), topRange.max(), topRange.min(), bottomRange.max(), bottomRange.min(), tauMax);
+    }
+
+    /**
+     * The largest and smallest of the values offered and where, as {@link Field#extremes}: the
+     * first of equal values wins, and values within 1e-10 of the largest magnitude are the
+     * round-off of a zero and read as zero.
+     */
+    private static final class Range {
+        private double max = Double.NEGATIVE_INFINITY;
+        private double min = Double.POSITIVE_INFINITY;
+        private double atMax;
+        private double atMin;
+        private double scale;
+
+        Range(double start) {
+            atMax = start;
+            atMin = start;
+        }
+
+        void offer(double value, double x) {
+            scale = Math.max(scale, Math.abs(value));
+            if (value > max) {
+                max = value;
+                atMax = x;
+            }
+            if (value < min) {
+                min = value;
+                atMin = x;
+            }
+        }
+
+        Extreme max() {
+            return new Extreme(Math.abs(max) <= 1e-10 * scale ? 0.0 : max, atMax, null);
+        }
+
+        Extreme min() {
+            return new Extreme(Math.abs(min) <= 1e-10 * scale ? 0.0 : min, atMin, null);
+        }
     }
 }
