@@ -61,8 +61,8 @@ public final class Analysis {
         List<CombinationResult> results = new ArrayList<>();
         for (int i = 0; i < combinations.size(); i++) {
             Combination c = combinations.get(i);
-            Response r = combine(model, cases, c.factors(), c.name());
-            results.add(new CombinationResult(c.name(), c.factors(), references.get(i), "", List.of(), r, stresses.extremes(r)));
+            Superposition sum = new Superposition(c.factors().size()).addCases(cases, c.factors());
+            results.add(result(model, stresses, sum, c.name(), c.factors(), references.get(i), "", List.of()));
         }
         List<AnalysisResult.Span> spans = Spans.of(job.beam());
         if (!job.pattern().isEmpty()) {
@@ -82,43 +82,10 @@ public final class Analysis {
         }
     }
 
-    static Response combine(StructureModel model, Map<String, Response> cases, Map<String, Double> factors, String name) {
-        return new Terms(factors.size()).addCases(cases, factors).sum(model, name);
-    }
-
-    /** The factored responses of a combination, summed at the end in one pass per field. */
-    private static final class Terms {
-        private Response[] responses;
-        private double[] factors;
-        private int count;
-
-        Terms(int capacity) {
-            responses = new Response[Math.max(capacity, 1)];
-            factors = new double[responses.length];
-        }
-
-        Terms addCases(Map<String, Response> cases, Map<String, Double> caseFactors) {
-            for (Map.Entry<String, Double> f : caseFactors.entrySet()) {
-                Response r = cases.get(f.getKey());
-                if (r != null && f.getValue() != 0) {
-                    add(r, f.getValue());
-                }
-            }
-            return this;
-        }
-
-        void add(Response r, double factor) {
-            if (count == responses.length) {
-                responses = java.util.Arrays.copyOf(responses, 2 * count);
-                factors = java.util.Arrays.copyOf(factors, 2 * count);
-            }
-            responses[count] = r;
-            factors[count++] = factor;
-        }
-
-        Response sum(StructureModel model, String name) {
-            return Response.linear(name, responses, factors, count, model.supports().size(), model.elementStarts(), model.elementEnds());
-        }
+    private static CombinationResult result(StructureModel model, Stresses stresses, Superposition sum, String name,
+                                            Map<String, Double> factors, String reference, String arrangement, List<Integer> regions) {
+        return new CombinationResult(name, factors, reference, arrangement, regions, () -> sum.response(model, name),
+                stresses.extremes(sum, model.elementStarts(), model.elementEnds()));
     }
 
     /**
@@ -153,7 +120,7 @@ public final class Analysis {
             for (boolean[] loaded : arrangements) {
                 String arrangement = describe(spans, loaded);
                 String name = combination.name() + " (" + String.join(", ", job.pattern()) + " on " + arrangement + ")";
-                Terms terms = new Terms(fixed.size() + loaded.length).addCases(cases, fixed);
+                Superposition terms = new Superposition(fixed.size() + loaded.length).addCases(cases, fixed);
                 for (String p : job.pattern()) {
                     double factor = combination.factors().getOrDefault(p, 0.0);
                     for (int i = 0; i < loaded.length; i++) {
@@ -162,15 +129,13 @@ public final class Analysis {
                         }
                     }
                 }
-                Response r = terms.sum(model, name);
                 List<Integer> regions = new ArrayList<>();
                 for (int i = 0; i < loaded.length; i++) {
                     if (loaded[i]) {
                         regions.add(i);
                     }
                 }
-                results.add(new CombinationResult(name, combination.factors(), references.get(c), arrangement, regions, r,
-                        stresses.extremes(r)));
+                results.add(result(model, stresses, terms, name, combination.factors(), references.get(c), arrangement, regions));
             }
         }
         return results;

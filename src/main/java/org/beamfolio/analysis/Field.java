@@ -72,6 +72,23 @@ public final class Field {
         return v;
     }
 
+    /** out[k] = out[k] + factor * (coefficient k of piece i), for the six coefficients. */
+    void addPieceTimes(int i, double factor, double[] out) {
+        int base = i * STRIDE;
+        for (int k = 0; k < STRIDE; k++) {
+            out[k] = out[k] + factor * c[base + k];
+        }
+    }
+
+    /** A piece given by its six coefficients at local s, by Horner's rule as {@link #value}. */
+    static double value(double[] coefficients, double s) {
+        double v = 0;
+        for (int k = STRIDE - 1; k >= 0; k--) {
+            v = v * s + coefficients[k];
+        }
+        return v;
+    }
+
     /** Value at x; at a node, the value of the piece to the right (the left at the beam's end). */
     public double at(double x) {
         int i = indexRightOf(x);
@@ -190,20 +207,25 @@ public final class Field {
      * the start, the end, then the roots in ascending order. Returns how many.
      */
     int candidates(int piece, double[] points) {
-        double length = ends[piece] - starts[piece];
-        int base = piece * STRIDE;
+        double[] own = new double[STRIDE];
+        System.arraycopy(c, piece * STRIDE, own, 0, STRIDE);
+        return candidates(own, ends[piece] - starts[piece], points);
+    }
+
+    /** The candidates of a piece given by its six coefficients and its length, as {@link #candidates(int, double[])}. */
+    static int candidates(double[] coefficients, double length, double[] points) {
         points[0] = 0;
         points[1] = length;
         boolean constant = true;
         for (int k = 1; k < STRIDE; k++) {
-            constant &= c[base + k] == 0;
+            constant &= coefficients[k] == 0;
         }
         if (constant) {
             return 2;
         }
         double[] d = new double[STRIDE - 1];
         for (int k = 1; k < STRIDE; k++) {
-            d[k - 1] = k * c[base + k];
+            d[k - 1] = k * coefficients[k];
         }
         double[] roots = new double[STRIDE];
         int count = Roots.in(d, 0, length, roots);

@@ -48,15 +48,12 @@ public final class Stresses {
     }
 
     /**
-     * Every extreme of a response in one pass along the beam: the candidate points of the shear
-     * (its piece ends and stationary points) serve the shear stress too, and those of the moment
-     * the fibre stresses, which are scaled shears and moments. Nothing is allocated per piece.
+     * Every extreme of a combination in one pass along the beam, piece by piece from its terms:
+     * the candidate points of the shear (its piece ends and stationary points) serve the shear
+     * stress too, and those of the moment the fibre stresses, which are scaled shears and moments.
      */
-    Extremes extremes(Response r) {
-        Field v = r.shear();
-        Field m = r.moment();
-        Field d = r.deflection();
-        double x0 = m.start(0);
+    Extremes extremes(Superposition sum, double[] starts, double[] ends) {
+        double x0 = starts[0];
         Range shearRange = new Range(x0);
         Range momentRange = new Range(x0);
         Range deflectionRange = new Range(x0);
@@ -64,26 +61,31 @@ public final class Stresses {
         Range bottomRange = new Range(x0);
         Range tau = shear == null ? null : new Range(x0);
         double[] points = new double[Field.CANDIDATES];
-        for (int i = 0; i < m.size(); i++) {
-            double start = m.start(i);
-            int count = v.candidates(i, points);
+        double[] piece = new double[Field.STRIDE];
+        for (int i = 0; i < starts.length; i++) {
+            double start = starts[i];
+            double length = ends[i] - starts[i];
+            sum.piece(Superposition.Quantity.SHEAR, i, piece);
+            int count = Field.candidates(piece, length, points);
             for (int k = 0; k < count; k++) {
-                double value = v.value(i, points[k]);
+                double value = Field.value(piece, points[k]);
                 shearRange.offer(value, start + points[k]);
                 if (tau != null) {
                     tau.offer(shear[i] * value, start + points[k]);
                 }
             }
-            count = m.candidates(i, points);
+            sum.piece(Superposition.Quantity.MOMENT, i, piece);
+            count = Field.candidates(piece, length, points);
             for (int k = 0; k < count; k++) {
-                double value = m.value(i, points[k]);
+                double value = Field.value(piece, points[k]);
                 momentRange.offer(value, start + points[k]);
                 topRange.offer(top[i] * value, start + points[k]);
                 bottomRange.offer(bottom[i] * value, start + points[k]);
             }
-            count = d.candidates(i, points);
+            sum.piece(Superposition.Quantity.DEFLECTION, i, piece);
+            count = Field.candidates(piece, length, points);
             for (int k = 0; k < count; k++) {
-                deflectionRange.offer(d.value(i, points[k]), start + points[k]);
+                deflectionRange.offer(Field.value(piece, points[k]), start + points[k]);
             }
         }
         Extreme tauMax = null;
