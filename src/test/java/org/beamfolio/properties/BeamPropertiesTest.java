@@ -70,6 +70,24 @@ class BeamPropertiesTest {
     }
 
     @Test
+    void extremesFoundPieceByPieceAreThoseOfTheWholeDiagrams() {
+        // a combination's extremes come from its load cases piece by piece, its diagrams are summed
+        // only when read: both must give the same numbers, to the bit (the same sums in the same order)
+        Trials.forAll(15, 150, RandomBeams::next, beam -> {
+            for (org.beamfolio.analysis.CombinationResult c : TestJobs.solve(beam.text()).combinations()) {
+                Response r = c.response();
+                assertEquals(r.moment().max().value(), c.extremes().momentMax().value(), 0.0, c.name() + " largest moment");
+                assertEquals(r.moment().max().at(), c.extremes().momentMax().at(), 0.0, c.name() + " where");
+                assertEquals(r.moment().min().value(), c.extremes().momentMin().value(), 0.0, c.name() + " smallest moment");
+                assertEquals(r.shear().max().value(), c.extremes().shearMax().value(), 0.0, c.name() + " largest shear");
+                assertEquals(r.shear().min().at(), c.extremes().shearMin().at(), 0.0, c.name() + " where the smallest shear");
+                assertEquals(r.deflection().max().value(), c.extremes().deflectionMax().value(), 0.0, c.name() + " deflection");
+                assertEquals(r.deflection().min().value(), c.extremes().deflectionMin().value(), 0.0, c.name() + " upward deflection");
+            }
+        });
+    }
+
+    @Test
     void theSumOfTwoCasesIsTheResultOfTheirLoadsTogether() {
         Trials.forAll(13, 150, RandomBeams::next, beam -> {
             Response combined = all(TestJobs.solve(beam.text()));

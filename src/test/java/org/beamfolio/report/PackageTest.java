@@ -141,4 +141,18 @@ class PackageTest {
             assertTrue(printed.contains("<i>wet</i> & heavy"), "notes as typed");
         }
     }
+
+    @Test
+    void aRendererUsedForOneJobAfterAnotherGivesTheBytesOfAFreshOne() throws Exception {
+        // fonts and the font resolver are shared by the documents of one renderer: nothing of one
+        // package (glyphs used, subset names) may leak into the next
+        AnalysisResult other = org.beamfolio.analysis.Analysis.run(JobReader.read(Path.of("example-jobs/balcony-cantilever.yaml")).job());
+        AnalysisResult footbridge = org.beamfolio.analysis.Analysis.run(JobReader.read(JOB).job());
+        PackageRenderer reused = new PackageRenderer();
+        byte[] first = reused.render(other, Checks.run(other));
+        byte[] after = reused.render(footbridge, Checks.run(footbridge));
+        assertArrayEquals(pdf, after, "the footbridge package after another job");
+        assertArrayEquals(new PackageRenderer().render(other, Checks.run(other)), first, "the first job, fresh renderer");
+        assertArrayEquals(first, reused.render(other, Checks.run(other)), "the first job again, third document of the renderer");
+    }
 }
