@@ -24,8 +24,26 @@ import org.beamfolio.results.ResultsWriter;
  * complete, so bad input or a failure never leaves half a package or replaces a good one.
  */
 final class Pipeline {
-    private final PackageRenderer renderer = new PackageRenderer();
+    private final PackageRenderer renderer = takeEarlyOrNew();
     private final boolean archival;
+
+    /** A renderer whose setup began before the command line was parsed, for the first pipeline. */
+    private static final java.util.concurrent.atomic.AtomicReference<PackageRenderer> EARLY =
+            new java.util.concurrent.atomic.AtomicReference<>();
+
+    /**
+     * Starts setting up one renderer now, on its own thread, for the first pipeline made: a
+     * one-job build then overlaps that setup with parsing the command line as well as with
+     * reading and solving the job.
+     */
+    static void startEarly() {
+        EARLY.compareAndSet(null, new PackageRenderer());
+    }
+
+    private static PackageRenderer takeEarlyOrNew() {
+        PackageRenderer early = EARLY.getAndSet(null);
+        return early != null ? early : new PackageRenderer();
+    }
 
     Pipeline() {
         this(true);
