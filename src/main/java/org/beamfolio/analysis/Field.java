@@ -136,15 +136,6 @@ public final class Field {
         return new Field(starts, ends, r);
     }
 
-    /** this + k * other, in one pass. */
-    public Field plusTimes(Field other, double k) {
-        double[] r = new double[c.length];
-        for (int i = 0; i < r.length; i++) {
-            r[i] = c[i] + k * other.c[i];
-        }
-        return new Field(starts, ends, r);
-    }
-
     /**
      * The sum of factors[t] * fields[t] in one pass, the terms added in order, so each
      * coefficient is the same sum as adding the terms one by one; one array, not one per term.

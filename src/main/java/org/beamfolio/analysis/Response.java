@@ -26,18 +26,6 @@ public record Response(String name, double[] reactionForce, double[] reactionMom
                 deflection.plus(o.deflection), Math.min(pivotRatio, o.pivotRatio));
     }
 
-    /** this + k * other, in one pass over every field. */
-    public Response plusTimes(Response o, double k, String newName) {
-        double[] rf = new double[reactionForce.length];
-        double[] rm = new double[reactionMoment.length];
-        for (int i = 0; i < rf.length; i++) {
-            rf[i] = reactionForce[i] + k * o.reactionForce[i];
-            rm[i] = reactionMoment[i] + k * o.reactionMoment[i];
-        }
-        return new Response(newName, rf, rm, shear.plusTimes(o.shear, k), moment.plusTimes(o.moment, k), slope.plusTimes(o.slope, k),
-                deflection.plusTimes(o.deflection, k), Math.min(pivotRatio, o.pivotRatio));
-    }
-
     public Response times(double k, String newName) {
         double[] rf = Arrays.stream(reactionForce).map(v -> v * k).toArray();
         double[] rm = Arrays.stream(reactionMoment).map(v -> v * k).toArray();
