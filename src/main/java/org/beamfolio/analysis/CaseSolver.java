@@ -177,21 +177,13 @@ public final class CaseSolver {
             for (int k = 0; k < 5; k++) {
                 deflection[b + k + 1] = slope[b + k] / (k + 1) * -1;
             }
-            v = horner(shear, b, 2, length);
-            mo = horner(moment, b, 3, length);
+            v = Polynomial.horner(shear, b, 2, length);
+            mo = Polynomial.horner(moment, b, 3, length);
         }
         double[] starts = m.elementStarts();
         double[] ends = m.elementEnds();
         return new Response(name, reactionForce, reactionMoment, Field.of(starts, ends, shear), Field.of(starts, ends, moment),
                 Field.of(starts, ends, slope), Field.of(starts, ends, deflection), pivotRatio);
-    }
-
-    private static double horner(double[] c, int base, int degree, double s) {
-        double value = 0;
-        for (int k = degree; k >= 0; k--) {
-            value = value * s + c[base + k];
-        }
-        return value;
     }
 
     /**

@@ -64,12 +64,7 @@ public final class Field {
 
     /** Piece i at local s, by Horner's rule on the flat coefficients. */
     double value(int i, double s) {
-        int base = i * STRIDE;
-        double v = 0;
-        for (int k = STRIDE - 1; k >= 0; k--) {
-            v = v * s + c[base + k];
-        }
-        return v;
+        return Polynomial.horner(c, i * STRIDE, STRIDE - 1, s);
     }
 
     /** out[k] = out[k] + factor * (coefficient k of piece i), for the six coefficients. */
@@ -82,11 +77,7 @@ public final class Field {
 
     /** A piece given by its six coefficients at local s, by Horner's rule as {@link #value}. */
     static double value(double[] coefficients, double s) {
-        double v = 0;
-        for (int k = STRIDE - 1; k >= 0; k--) {
-            v = v * s + coefficients[k];
-        }
-        return v;
+        return Polynomial.horner(coefficients, 0, STRIDE - 1, s);
     }
 
     /** Value at x; at a node, the value of the piece to the right (the left at the beam's end). */
@@ -139,10 +130,11 @@ public final class Field {
     /**
      * The sum of factors[t] * fields[t] in one pass, the terms added in order, so each
      * coefficient is the same sum as adding the terms one by one; one array, not one per term.
-     * Every field must share this one's pieces.
+     * The fields share their pieces; there is at least one.
      */
-    Field linear(Field[] fields, double[] factors, int count) {
-        double[] r = new double[c.length];
+    static Field linear(Field[] fields, double[] factors, int count) {
+        Field first = fields[0];
+        double[] r = new double[first.c.length];
         for (int t = 0; t < count; t++) {
             double k = factors[t];
             double[] o = fields[t].c;
@@ -150,7 +142,7 @@ public final class Field {
                 r[i] = r[i] + k * o[i];
             }
         }
-        return new Field(starts, ends, r);
+        return new Field(first.starts, first.ends, r);
     }
 
     /** The same pieces, each scaled by its own factor (a stress from a moment, segment by segment). */
@@ -186,24 +178,20 @@ public final class Field {
 
     /** Where a piece can take its extremes: its two ends and the real roots of its derivative (local s). */
     public double[] candidates(int piece) {
+        double[] own = new double[STRIDE];
+        System.arraycopy(c, piece * STRIDE, own, 0, STRIDE);
         double[] points = new double[CANDIDATES];
-        return java.util.Arrays.copyOf(points, candidates(piece, points));
+        return java.util.Arrays.copyOf(points, candidates(own, ends[piece] - starts[piece], points));
     }
 
     /** Room for the candidates of any piece: two ends and up to five roots. */
     static final int CANDIDATES = STRIDE + 1;
 
     /**
-     * The candidates of a piece written to {@code points} (at least {@link #CANDIDATES} long):
-     * the start, the end, then the roots in ascending order. Returns how many.
+     * The candidates of a piece given by its six coefficients and its length, written to
+     * {@code points} (at least {@link #CANDIDATES} long): the start, the end, then the roots in
+     * ascending order. Returns how many.
      */
-    int candidates(int piece, double[] points) {
-        double[] own = new double[STRIDE];
-        System.arraycopy(c, piece * STRIDE, own, 0, STRIDE);
-        return candidates(own, ends[piece] - starts[piece], points);
-    }
-
-    /** The candidates of a piece given by its six coefficients and its length, as {@link #candidates(int, double[])}. */
     static int candidates(double[] coefficients, double length, double[] points) {
         points[0] = 0;
         points[1] = length;

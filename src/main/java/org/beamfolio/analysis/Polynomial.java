@@ -30,9 +30,14 @@ public final class Polynomial {
 
     /** Horner's rule. */
     public double at(double s) {
+        return horner(c, 0, c.length - 1, s);
+    }
+
+    /** Horner's rule on the coefficients c[base] (constant) to c[base + degree], at s. */
+    static double horner(double[] c, int base, int degree, double s) {
         double v = 0;
-        for (int i = c.length - 1; i >= 0; i--) {
-            v = v * s + c[i];
+        for (int k = degree; k >= 0; k--) {
+            v = v * s + c[base + k];
         }
         return v;
     }

@@ -60,9 +60,8 @@ public record Response(String name, double[] reactionForce, double[] reactionMom
             theta[t] = r.slope;
             d[t] = r.deflection;
         }
-        Field first = terms[0].shear;
-        return new Response(name, rf, rm, first.linear(v, factors, count), first.linear(m, factors, count),
-                first.linear(theta, factors, count), first.linear(d, factors, count), pivot);
+        return new Response(name, rf, rm, Field.linear(v, factors, count), Field.linear(m, factors, count),
+                Field.linear(theta, factors, count), Field.linear(d, factors, count), pivot);
     }
 
     public static Response zero(String name, int supports, double[] starts, double[] ends) {

@@ -60,8 +60,8 @@ public final class Roots {
         for (int i = 0; i + 1 < size; i++) {
             double lo = breaks[i];
             double hi = breaks[i + 1];
-            double flo = at(c, degree, lo);
-            double fhi = at(c, degree, hi);
+            double flo = Polynomial.horner(c, 0, degree, lo);
+            double fhi = Polynomial.horner(c, 0, degree, hi);
             if (flo == 0) {
                 count = addDistinct(out, count, lo);
             } else if (fhi != 0 && Math.signum(flo) != Math.signum(fhi)) {
@@ -80,15 +80,6 @@ public final class Roots {
             d[k - 1] = k * c[k];
         }
         return d;
-    }
-
-    /** Horner's rule on c[0..degree]. */
-    private static double at(double[] c, int degree, double s) {
-        double v = 0;
-        for (int i = degree; i >= 0; i--) {
-            v = v * s + c[i];
-        }
-        return v;
     }
 
     /**
@@ -131,7 +122,7 @@ public final class Roots {
     private static double bisect(double[] c, int degree, double[] slope, double lo, double hi, double flo) {
         double x = 0.5 * (lo + hi);
         for (int i = 0; i < 200 && hi - lo > 0; i++) {
-            double fx = at(c, degree, x);
+            double fx = Polynomial.horner(c, 0, degree, x);
             if (fx == 0) {
                 return x;
             }
@@ -141,7 +132,7 @@ public final class Roots {
             } else {
                 hi = x;
             }
-            double gradient = at(slope, degree - 1, x);
+            double gradient = Polynomial.horner(slope, 0, degree - 1, x);
             double next = gradient != 0 ? x - fx / gradient : Double.NaN;
             if (!(next > lo && next < hi)) {
                 next = 0.5 * (lo + hi);

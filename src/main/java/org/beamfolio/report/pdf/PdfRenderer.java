@@ -44,8 +44,6 @@ public final class PdfRenderer {
     private final EmbeddedFonts fonts = new EmbeddedFonts();
     private final DocumentBuilder parser = xhtmlParser();
 
-    public PdfRenderer() {}
-
     /**
      * A renderer that has drawn {@code rehearsal} once into a throwaway page, so the platform's
      * font manager, the PDF writer and the drawing code are loaded and initialised before the
