@@ -12,9 +12,11 @@ import org.beamfolio.combinations.CombinationSet;
 import org.beamfolio.model.Combination;
 import org.beamfolio.model.Job;
 import org.beamfolio.model.Load;
+import org.beamfolio.model.ReportSettings;
 import org.beamfolio.model.Section;
 import org.beamfolio.section.SectionCalculator;
 import org.beamfolio.section.SectionProperties;
+import org.beamfolio.units.Lengths;
 
 /**
  * The analysis stage's entry point: checks the beam is stable, builds the element model, solves
@@ -24,7 +26,8 @@ public final class Analysis {
     private Analysis() {}
 
     public static AnalysisResult run(Job job) throws UnstableBeamException {
-        Optional<Instability> instability = Stability.check(job.beam());
+        Optional<Instability> instability = Stability.check(job.beam(), job.report().units() == ReportSettings.UnitSystem.SI
+                ? Lengths.Style.METRES : Lengths.Style.FEET_AND_INCHES);
         if (instability.isPresent()) {
             throw new UnstableBeamException(instability.get());
         }

@@ -24,7 +24,13 @@ import org.beamfolio.units.Lengths;
 public final class Stability {
     private Stability() {}
 
+    /** The check with positions in messages in metres. */
     public static Optional<Instability> check(Beam beam) {
+        return check(beam, Lengths.Style.METRES);
+    }
+
+    /** The check with positions in messages written in the job's style. */
+    public static Optional<Instability> check(Beam beam, Lengths.Style lengths) {
         if (beam.supports().stream().noneMatch(s -> s.kind().restrainsHorizontally())) {
             Support first = beam.supports().get(0);
             return Optional.of(new Instability("beam.supports", first.where(),
@@ -65,7 +71,7 @@ public final class Stability {
             return Optional.empty();
         }
         double[] motion = svd.getV().getColumn(sv.length - 1);
-        return Optional.of(describe(beam, motion));
+        return Optional.of(describe(beam, motion, lengths));
     }
 
     static boolean restrainsRotation(SupportKind kind) {
@@ -73,7 +79,7 @@ public final class Stability {
     }
 
     /** Names the first rigid part that moves, and the point it turns about or that it slides. */
-    private static Instability describe(Beam beam, double[] motion) {
+    private static Instability describe(Beam beam, double[] motion, Lengths.Style lengths) {
         double length = beam.length();
         List<Hinge> hinges = beam.hinges();
         double size = 0;
@@ -93,13 +99,13 @@ public final class Stability {
             double vStart = a + slope * partStart / length;
             double vEnd = a + slope * partEnd / length;
             if (Math.max(Math.abs(vStart), Math.abs(vEnd)) > 1e-6 * size) {
-                String range = hinges.isEmpty() ? "the beam" : "the part of the beam from " + ft(partStart) + " to " + ft(partEnd);
+                String range = hinges.isEmpty() ? "the beam" : "the part of the beam from " + Lengths.describe(partStart, lengths) + " to " + Lengths.describe(partEnd, lengths);
                 String movement;
                 if (Math.abs(slope) <= 1e-9 * size) {
                     movement = range + " can move up and down freely: add a support under it";
                 } else {
                     double pivot = -a / slope * length;
-                    movement = range + " can rotate about " + pivotName(beam, pivot)
+                    movement = range + " can rotate about " + pivotName(beam, pivot, lengths)
                             + (hinges.isEmpty() ? ": add a second support or fix this one"
                             : ": add a support to that part, or remove a hinge that frees it");
                 }
@@ -115,22 +121,18 @@ public final class Stability {
         return new Instability("beam.supports", beam.supports().get(0).where(), "the beam is a mechanism");
     }
 
-    private static String pivotName(Beam beam, double pivot) {
+    private static String pivotName(Beam beam, double pivot, Lengths.Style lengths) {
         double tolerance = 1e-6 * beam.length();
         for (Support s : beam.supports()) {
             if (Math.abs(s.at() - pivot) <= tolerance) {
-                return "the " + s.kind().label() + " support at " + ft(s.at());
+                return "the " + s.kind().label() + " support at " + Lengths.describe(s.at(), lengths);
             }
         }
         for (Hinge h : beam.hinges()) {
             if (Math.abs(h.at() - pivot) <= tolerance) {
-                return "the hinge at " + ft(h.at());
+                return "the hinge at " + Lengths.describe(h.at(), lengths);
             }
         }
-        return "the point " + ft(pivot);
-    }
-
-    private static String ft(double metres) {
-        return Lengths.describe(metres);
+        return "the point " + Lengths.describe(pivot, lengths);
     }
 }

@@ -3,7 +3,6 @@ package org.beamfolio.job;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
-import java.util.Map;
 import org.beamfolio.model.Beam;
 import org.beamfolio.model.Hinge;
 import org.beamfolio.model.Material;
@@ -13,7 +12,6 @@ import org.beamfolio.model.Segment;
 import org.beamfolio.model.Support;
 import org.beamfolio.model.SupportKind;
 import org.beamfolio.units.Dimension;
-import org.beamfolio.units.Lengths;
 import org.beamfolio.units.Suggest;
 
 /** Reads the beam: its length, section and material, supports, hinges and segments. */
@@ -24,7 +22,7 @@ final class BeamReader {
 
     private BeamReader() {}
 
-    static Beam read(ReadContext c, YamlNode node, Map<String, Material> materials, Map<String, Section> sections) {
+    static Beam read(ReadContext c, YamlNode node, Defined<Material> materials, Defined<Section> sections) {
         if (node == null) {
             return null;
         }
@@ -34,8 +32,8 @@ final class BeamReader {
         }
         YamlNode lengthNode = f.required("length");
         Double length = lengthNode == null ? null : c.positive(lengthNode, f.path("length"), Dimension.LENGTH);
-        String section = reference(c, f, "section", sections.keySet(), "sections", true);
-        String material = reference(c, f, "material", materials.keySet(), "materials", true);
+        String section = reference(c, f, "section", sections, "sections", true);
+        String material = reference(c, f, "material", materials, "materials", true);
         List<Support> supports = supports(c, f, length);
         List<Hinge> hinges = hinges(c, f, length, supports);
         List<Segment> segments = segments(c, f, length, sections, materials);
@@ -43,7 +41,7 @@ final class BeamReader {
         String selfWeight = sw == null ? null : c.id(sw, f.path("self_weight"));
         if (selfWeight != null && section != null && material != null) {
             for (String m : usedMaterials(material, segments)) {
-                if (materials.containsKey(m) && materials.get(m).weightDensity() == null) {
+                if (materials.has(m) && materials.get(m).weightDensity() == null) {
                     c.error(sw, f.path("self_weight"), "self weight needs a density: material \"" + m + "\" has none");
                 }
             }
@@ -76,7 +74,7 @@ final class BeamReader {
         return result;
     }
 
-    static String reference(ReadContext c, ReadContext.Fields f, String key, java.util.Set<String> ids, String where, boolean required) {
+    static String reference(ReadContext c, ReadContext.Fields f, String key, Defined<?> defined, String where, boolean required) {
         YamlNode n = required ? f.required(key) : f.optional(key);
         if (n == null) {
             return null;
@@ -85,6 +83,10 @@ final class BeamReader {
         if (id == null) {
             return null;
         }
+        if (defined.failed(id)) {
+            return null; // its definition has its own message
+        }
+        java.util.Set<String> ids = defined.ids();
         if (!ids.contains(id)) {
             String hint = Suggest.closest(id, ids).map(s -> "; did you mean \"" + s + "\"?").orElse("");
             c.error(n, f.path(key), "no " + key + " \"" + id + "\" under " + where + hint
@@ -101,7 +103,7 @@ final class BeamReader {
             return x;
         }
         if (x < -SAME_POINT * length || x > length * (1 + SAME_POINT)) {
-            c.error(n, path, "is off the beam: positions run from 0 to the beam length " + Lengths.describe(length));
+            c.error(n, path, "is off the beam: positions run from 0 to the beam length " + c.length(length));
             return null;
         }
         return Math.max(0, Math.min(length, x));
@@ -154,7 +156,7 @@ final class BeamReader {
             }
             for (Support earlier : result) {
                 if (Math.abs(earlier.at() - at) <= same) {
-                    c.error(atNode, s.path("at"), "two supports at " + Lengths.describe(at) + " (the other is at line "
+                    c.error(atNode, s.path("at"), "two supports at " + c.length(at) + " (the other is at line "
                             + earlier.where().line() + "): combine them into one");
                     ok = false;
                 }
@@ -205,14 +207,14 @@ final class BeamReader {
                             || (s.kind() instanceof SupportKind.Spring sp && sp.kr() > 0);
                     if (restrainsRotation && Math.abs(s.at() - at) <= SAME_POINT * length) {
                         c.error(item, path, "a hinge cannot stand at a support that restrains rotation ("
-                                + s.kind().label() + " at " + Lengths.describe(s.at()) + "): say which side the support holds by moving one of them");
+                                + s.kind().label() + " at " + c.length(s.at()) + "): say which side the support holds by moving one of them");
                         ok = false;
                     }
                 }
             }
             for (Hinge earlier : result) {
                 if (Math.abs(earlier.at() - at) <= SAME_POINT * length) {
-                    c.error(item, path, "two hinges at " + Lengths.describe(at));
+                    c.error(item, path, "two hinges at " + c.length(at));
                     ok = false;
                 }
             }
@@ -226,7 +228,7 @@ final class BeamReader {
     }
 
     private static List<Segment> segments(ReadContext c, ReadContext.Fields f, Double length,
-                                          Map<String, Section> sections, Map<String, Material> materials) {
+                                          Defined<Section> sections, Defined<Material> materials) {
         List<YamlNode> items = JobReader.listOrEmpty(c, f.optional("segments"), f.path("segments"));
         if (items == null) {
             return null;
@@ -245,9 +247,9 @@ final class BeamReader {
             YamlNode toNode = s.required("to");
             Double from = fromNode == null ? null : position(c, fromNode, s.path("from"), length);
             Double to = toNode == null ? null : position(c, toNode, s.path("to"), length);
-            String section = s.has("section") ? reference(c, s, "section", sections.keySet(), "sections", false)
+            String section = s.has("section") ? reference(c, s, "section", sections, "sections", false)
                     : defaultId(f, "section");
-            String material = s.has("material") ? reference(c, s, "material", materials.keySet(), "materials", false)
+            String material = s.has("material") ? reference(c, s, "material", materials, "materials", false)
                     : defaultId(f, "material");
             if (!s.has("section") && !s.has("material")) {
                 c.error(items.get(i), path, "a segment must name a section or a material (or both)");
@@ -265,8 +267,8 @@ final class BeamReader {
             }
             for (Segment earlier : result) {
                 if (from < earlier.to() - same && to > earlier.from() + same) {
-                    c.error(items.get(i), path, "overlaps an earlier segment (" + Lengths.describe(earlier.from()) + " to "
-                            + Lengths.describe(earlier.to()) + ")");
+                    c.error(items.get(i), path, "overlaps an earlier segment (" + c.length(earlier.from()) + " to "
+                            + c.length(earlier.to()) + ")");
                     ok = false;
                 }
             }

@@ -27,12 +27,8 @@ final class CombinationReader {
     record Outcome(String setName, List<Combination> combinations, List<String> pattern, boolean stressCheck,
                    List<DeflectionLimit> deflection) {}
 
-    static Outcome read(ReadContext c, ReadContext.Fields top, List<Load> loads, Beam beam) {
-        Set<String> used = new LinkedHashSet<>();
-        loads.forEach(l -> used.add(l.loadCase()));
-        if (beam != null && beam.selfWeightCase() != null) {
-            used.add(beam.selfWeightCase());
-        }
+    static Outcome read(ReadContext c, ReadContext.Fields top, Defined<String> cases, Beam beam) {
+        Set<String> used = cases.ids();
         String setName = null;
         List<Combination> combinations = new ArrayList<>();
         YamlNode node = top.optional("combinations");
@@ -51,9 +47,9 @@ final class CombinationReader {
                 }
             }
         } else {
-            explicit(c, node, used, combinations);
+            explicit(c, node, cases, combinations);
         }
-        List<String> pattern = pattern(c, top.optional("pattern"), used, beam);
+        List<String> pattern = pattern(c, top.optional("pattern"), cases, beam);
         boolean stress = false;
         List<DeflectionLimit> deflection = new ArrayList<>();
         YamlNode checks = top.optional("checks");
@@ -68,7 +64,7 @@ final class CombinationReader {
                 List<YamlNode> items = JobReader.listOrEmpty(c, f.optional("deflection"), f.path("deflection"));
                 if (items != null) {
                     for (int i = 0; i < items.size(); i++) {
-                        DeflectionLimit limit = deflectionLimit(c, items.get(i), f.path("deflection") + "[" + i + "]", used);
+                        DeflectionLimit limit = deflectionLimit(c, items.get(i), f.path("deflection") + "[" + i + "]", cases);
                         if (limit != null) {
                             deflection.add(limit);
                         }
@@ -99,7 +95,7 @@ final class CombinationReader {
         return result;
     }
 
-    private static void explicit(ReadContext c, YamlNode node, Set<String> used, List<Combination> out) {
+    private static void explicit(ReadContext c, YamlNode node, Defined<String> cases, List<Combination> out) {
         List<YamlNode> items = c.list(node, "combinations").orElse(null);
         if (items == null) {
             return;
@@ -133,8 +129,8 @@ final class CombinationReader {
                 }
                 for (YamlNode.Entry entry : ff.node().entries().values()) {
                     ff.optional(entry.key());
-                    if (!used.contains(entry.key())) {
-                        c.error(entry.keyLocation(), ff.path(entry.key()), unusedCase(entry.key(), used));
+                    if (!cases.has(entry.key())) {
+                        unusedCase(c, entry.keyLocation(), ff.path(entry.key()), entry.key(), cases);
                         continue;
                     }
                     Double factor = c.number(entry.value(), ff.path(entry.key()));
@@ -150,12 +146,18 @@ final class CombinationReader {
         }
     }
 
-    static String unusedCase(String loadCase, Set<String> used) {
+    /** A case no load uses, unless the loads that name it failed to read (they have their own messages). */
+    private static void unusedCase(ReadContext c, Location at, String path, String loadCase, Defined<String> cases) {
+        if (cases.failed(loadCase)) {
+            return;
+        }
+        Set<String> used = cases.ids();
         String hint = Suggest.closest(loadCase, used).map(s -> "; did you mean \"" + s + "\"?").orElse("");
-        return "no load uses case \"" + loadCase + "\"" + hint + (used.isEmpty() ? "" : " (cases with loads: " + String.join(", ", used) + ")");
+        c.error(at, path, "no load uses case \"" + loadCase + "\"" + hint
+                + (used.isEmpty() ? "" : " (cases with loads: " + String.join(", ", used) + ")"));
     }
 
-    private static List<String> pattern(ReadContext c, YamlNode node, Set<String> used, Beam beam) {
+    private static List<String> pattern(ReadContext c, YamlNode node, Defined<String> cases, Beam beam) {
         List<String> result = new ArrayList<>();
         List<YamlNode> items = JobReader.listOrEmpty(c, node, "pattern");
         if (items == null) {
@@ -166,8 +168,8 @@ final class CombinationReader {
             if (id == null) {
                 continue;
             }
-            if (!used.contains(id)) {
-                c.error(items.get(i), "pattern[" + i + "]", unusedCase(id, used));
+            if (!cases.has(id)) {
+                unusedCase(c, items.get(i).location(), "pattern[" + i + "]", id, cases);
             } else if (!result.contains(id)) {
                 result.add(id);
             }
@@ -179,12 +181,12 @@ final class CombinationReader {
         return result;
     }
 
-    private static DeflectionLimit deflectionLimit(ReadContext c, YamlNode node, String path, Set<String> used) {
+    private static DeflectionLimit deflectionLimit(ReadContext c, YamlNode node, String path, Defined<String> cases) {
         ReadContext.Fields f = c.fields(node, path);
         if (f == null) {
             return null;
         }
-        List<String> cases = new ArrayList<>();
+        List<String> named = new ArrayList<>();
         YamlNode casesNode = f.required("cases");
         List<YamlNode> items = casesNode == null ? null : c.list(casesNode, f.path("cases")).orElse(null);
         if (items != null) {
@@ -193,10 +195,10 @@ final class CombinationReader {
             }
             for (int i = 0; i < items.size(); i++) {
                 String id = c.id(items.get(i), f.path("cases") + "[" + i + "]");
-                if (id != null && !used.contains(id)) {
-                    c.error(items.get(i), f.path("cases") + "[" + i + "]", unusedCase(id, used));
+                if (id != null && !cases.has(id)) {
+                    unusedCase(c, items.get(i).location(), f.path("cases") + "[" + i + "]", id, cases);
                 } else if (id != null) {
-                    cases.add(id);
+                    named.add(id);
                 }
             }
         }
@@ -219,9 +221,9 @@ final class CombinationReader {
             max = c.positive(maxNode, f.path("max"), Dimension.LENGTH);
         }
         f.rejectUnknown();
-        if (cases.isEmpty() || (ratio == null && max == null)) {
+        if (named.isEmpty() || (ratio == null && max == null)) {
             return null;
         }
-        return new DeflectionLimit(cases, ratio, max);
+        return new DeflectionLimit(named, ratio, max);
     }
 }

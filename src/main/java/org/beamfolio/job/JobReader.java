@@ -22,6 +22,7 @@ import org.beamfolio.model.Project;
 import org.beamfolio.model.ReportSettings;
 import org.beamfolio.model.Section;
 import org.beamfolio.units.Dimension;
+import org.beamfolio.units.Lengths;
 
 /**
  * Reads a format 1 job file into a validated {@link Job}, or into the complete list of what is
@@ -141,10 +142,14 @@ public final class JobReader {
                 context.error(version, "beamfolio", "unsupported format version: this tool reads format 1 (write \"beamfolio: 1\")");
             }
             Project project = ProjectReader.read(context, top.required("project"));
-            ReportSettings report = ProjectReader.report(context, top.optional("report"));
-            Map<String, Material> materials = materials(top.required("materials"));
-            Map<String, Section> sections = SectionReader.readAll(context, top.required("sections"));
-            Beam beam = BeamReader.read(context, top.required("beam"), materials, sections);
+            ReportSettings report = ProjectReader.report(context, top.optional("report"), JobUnits.of(top.optional("beam")));
+            context.writeLengthsAs(report.units() == ReportSettings.UnitSystem.SI ? Lengths.Style.METRES : Lengths.Style.FEET_AND_INCHES);
+            YamlNode materialsNode = top.required("materials");
+            Map<String, Material> materials = materials(materialsNode);
+            YamlNode sectionsNode = top.required("sections");
+            Map<String, Section> sections = SectionReader.readAll(context, sectionsNode);
+            YamlNode beamNode = top.required("beam");
+            Beam beam = BeamReader.read(context, beamNode, Defined.keysOf(materialsNode, materials), Defined.keysOf(sectionsNode, sections));
             List<Load> loads = LoadReader.readAll(context, top.optional("loads"), beam);
             Map<String, String> cases = cases(top.optional("cases"));
             if (loads.isEmpty() && (beam == null || beam.selfWeightCase() == null) && context.diagnostics().isEmpty()) {
@@ -152,7 +157,7 @@ public final class JobReader {
                 context.error(at != null ? at.location() : root.location(), "loads",
                         "the job has no loads: add at least one load (or beam.self_weight) for there to be anything to check");
             }
-            CombinationReader.Outcome combos = CombinationReader.read(context, top, loads, beam);
+            CombinationReader.Outcome combos = CombinationReader.read(context, top, LoadCases.of(loads, beam, beamNode, top.optional("loads")), beam);
             if (combos != null && combos.stressCheck() && beam != null) {
                 requireAllowables(top, materials, beam);
             }

@@ -58,8 +58,9 @@ final class ProjectReader {
         return value == null ? "" : value;
     }
 
-    static ReportSettings report(ReadContext context, YamlNode node) {
-        ReportSettings.UnitSystem units = ReportSettings.UnitSystem.US;
+    /** The report settings; {@code units} when the job does not give report.units. */
+    static ReportSettings report(ReadContext context, YamlNode node, ReportSettings.UnitSystem unitsByDefault) {
+        ReportSettings.UnitSystem units = unitsByDefault;
         ReportSettings.Paper paper = ReportSettings.Paper.LETTER;
         if (node == null) {
             return new ReportSettings(units, paper);

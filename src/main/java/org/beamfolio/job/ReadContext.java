@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Optional;
 import java.util.Set;
 import org.beamfolio.units.Dimension;
+import org.beamfolio.units.Lengths;
 import org.beamfolio.units.QuantityParser;
 import org.beamfolio.units.Suggest;
 
@@ -18,6 +19,7 @@ import org.beamfolio.units.Suggest;
 final class ReadContext {
     private final String file;
     private final List<Diagnostic> diagnostics = new ArrayList<>();
+    private Lengths.Style lengths = Lengths.Style.FEET_AND_INCHES;
 
     ReadContext(String file) {
         this.file = file;
@@ -29,6 +31,16 @@ final class ReadContext {
 
     List<Diagnostic> diagnostics() {
         return diagnostics;
+    }
+
+    /** Messages give lengths in the job's own units from here on. */
+    void writeLengthsAs(Lengths.Style style) {
+        lengths = style;
+    }
+
+    /** A length (a position, a span) for a message, in the job's units. */
+    String length(double metres) {
+        return Lengths.describe(metres, lengths);
     }
 
     void error(YamlNode at, String path, String message) {

@@ -60,8 +60,12 @@ final class YamlTreeReader {
             return root;
         } catch (JsonProcessingException e) {
             JsonLocation where = e.getLocation();
-            throw new SyntaxError("YAML syntax: " + cleanMessage(e.getOriginalMessage()),
-                    where == null ? Location.START : locationOf(where));
+            Location at = where == null ? Location.START : locationOf(where);
+            String message = e.getOriginalMessage();
+            if (message != null && message.contains("(TAB)")) {
+                throw tabError(text, at);
+            }
+            throw new SyntaxError("YAML syntax: " + cleanMessage(e.getOriginalMessage()), at);
         } catch (IOException e) {
             throw new SyntaxError("could not read YAML: " + e.getMessage(), Location.START);
         } catch (RuntimeException e) {
@@ -120,6 +124,27 @@ final class YamlTreeReader {
             default:
                 throw new IOException("unexpected YAML token " + token);
         }
+    }
+
+    static final String TAB_MESSAGE = "tabs are not allowed for indentation in YAML; use spaces";
+
+    /**
+     * The YAML reader refused a tab: said in plain words, at the tab. The reader stops at the tab
+     * or at the end of the line before it, so the tab is the first one from there on.
+     */
+    private static SyntaxError tabError(String text, Location stoppedAt) {
+        String[] lines = text.split("\r?\n", -1);
+        for (int i = Math.max(0, stoppedAt.line() - 1); i < lines.length; i++) {
+            String line = lines[i];
+            int from = i == stoppedAt.line() - 1 ? Math.min(line.length(), Math.max(0, stoppedAt.column() - 1)) : 0;
+            int column = line.indexOf('\t', from);
+            if (column >= 0) {
+                boolean indentation = line.substring(0, column).isBlank();
+                return new SyntaxError(indentation ? TAB_MESSAGE : "a tab cannot stand here in YAML; use spaces",
+                        new Location(i + 1, column + 1));
+            }
+        }
+        return new SyntaxError(TAB_MESSAGE, stoppedAt);
     }
 
     private static Location locationOf(JsonLocation where) {

@@ -10,7 +10,10 @@ import java.util.Optional;
 
 /**
  * The units a job file may use (format 1's table and a few common spellings) and their exact
- * factors to SI. The inch is 0.0254 m exactly and the pound-force 0.45359237 kg times standard
+ * factors to SI. Besides its symbols, the table accepts the shorthand US practice writes on
+ * drawings and in hand calculations where it cannot mean anything else ({@code k} and
+ * {@code kips} for kip, {@code '} and {@code "} for foot and inch, {@code ft-kip} beside
+ * {@code kip-ft}); an alias reads as its unit and is never printed. The inch is 0.0254 m exactly and the pound-force 0.45359237 kg times standard
  * gravity 9.80665 m/s^2 (both by definition: NIST SP 811, appendix B); the rest follow from them.
  */
 public final class Units {
@@ -21,6 +24,7 @@ public final class Units {
     public static final double KIP = 1000 * POUND_FORCE;
 
     private static final Map<String, Unit> BY_SYMBOL = new LinkedHashMap<>();
+    private static final Map<String, Unit> ALIASES = new LinkedHashMap<>();
 
     static {
         length("in", INCH);
@@ -28,11 +32,17 @@ public final class Units {
         length("mm", 1e-3);
         length("cm", 1e-2);
         length("m", 1.0);
+        shorthand("'", "ft");
+        shorthand("\"", "in");
 
         add("lb", Dimension.FORCE, POUND_FORCE);
         add("kip", Dimension.FORCE, KIP);
         add("N", Dimension.FORCE, 1.0);
         add("kN", Dimension.FORCE, 1e3);
+        shorthand("k", "kip");
+        shorthand("kips", "kip");
+        shorthand("lbs", "lb");
+        shorthand("lbf", "lb");
 
         add("lb/ft", Dimension.FORCE_PER_LENGTH, POUND_FORCE / FOOT);
         alias("plf", "lb/ft");
@@ -44,6 +54,9 @@ public final class Units {
         add("kN/m", Dimension.FORCE_PER_LENGTH, 1e3);
         add("N/mm", Dimension.FORCE_PER_LENGTH, 1e3);
         add("kN/mm", Dimension.FORCE_PER_LENGTH, 1e6);
+        shorthand("k/ft", "kip/ft");
+        shorthand("kips/ft", "kip/ft");
+        shorthand("k/in", "kip/in");
 
         add("lb*ft", Dimension.MOMENT, POUND_FORCE * FOOT);
         add("lb*in", Dimension.MOMENT, POUND_FORCE * INCH);
@@ -56,10 +69,13 @@ public final class Units {
         add("psi", Dimension.STRESS, POUND_FORCE / (INCH * INCH));
         add("ksi", Dimension.STRESS, KIP / (INCH * INCH));
         add("psf", Dimension.STRESS, POUND_FORCE / (FOOT * FOOT));
+        add("ksf", Dimension.STRESS, KIP / (FOOT * FOOT));
         add("Pa", Dimension.STRESS, 1.0);
         add("kPa", Dimension.STRESS, 1e3);
         add("MPa", Dimension.STRESS, 1e6);
         add("GPa", Dimension.STRESS, 1e9);
+        shorthand("N/mm^2", "MPa");
+        shorthand("kN/m^2", "kPa");
 
         power("in", INCH);
         power("ft", FOOT);
@@ -80,6 +96,18 @@ public final class Units {
         add("N*m/rad", Dimension.ROTATIONAL_STIFFNESS, 1.0);
         add("kN*m/rad", Dimension.ROTATIONAL_STIFFNESS, 1e3);
         add("N*mm/rad", Dimension.ROTATIONAL_STIFFNESS, 1e-3);
+        // the force and the length in either order: engineers write ft-kip as often as kip-ft
+        for (String suffix : new String[] {"", "/rad"}) {
+            shorthand("ft*lb" + suffix, "lb*ft" + suffix);
+            shorthand("in*lb" + suffix, "lb*in" + suffix);
+            shorthand("ft*kip" + suffix, "kip*ft" + suffix);
+            shorthand("in*kip" + suffix, "kip*in" + suffix);
+            shorthand("k*ft" + suffix, "kip*ft" + suffix);
+            shorthand("ft*k" + suffix, "kip*ft" + suffix);
+            shorthand("k*in" + suffix, "kip*in" + suffix);
+            shorthand("in*k" + suffix, "kip*in" + suffix);
+            shorthand("kNm" + suffix, "kN*m" + suffix);
+        }
     }
 
     private Units() {}
@@ -98,18 +126,32 @@ public final class Units {
         BY_SYMBOL.put(symbol, new Unit(symbol, dimension, toSi));
     }
 
+    /** Shorthand that reads as a unit of the table but is not offered as a symbol of its own. */
+    private static void shorthand(String alias, String symbol) {
+        ALIASES.put(alias, BY_SYMBOL.get(symbol));
+    }
+
     private static void alias(String alias, String symbol) {
         Unit unit = BY_SYMBOL.get(symbol);
         BY_SYMBOL.put(alias, new Unit(alias, unit.dimension(), unit.toSi()));
     }
 
-    /** The unit with this symbol; {@code -} may stand for {@code *} (kip-ft). */
+    /**
+     * The unit with this symbol or shorthand; {@code -} may stand for {@code *} (kip-ft). A
+     * shorthand gives the unit it stands for ({@code ft-kip} gives {@code kip*ft}).
+     */
     public static Optional<Unit> find(String symbol) {
-        Unit unit = BY_SYMBOL.get(symbol);
-        if (unit == null) {
-            unit = BY_SYMBOL.get(symbol.replace('-', '*'));
+        String product = symbol.replace('-', '*');
+        for (String spelling : new String[] {symbol, product}) {
+            Unit unit = BY_SYMBOL.get(spelling);
+            if (unit == null) {
+                unit = ALIASES.get(spelling);
+            }
+            if (unit != null) {
+                return Optional.of(unit);
+            }
         }
-        return Optional.ofNullable(unit);
+        return Optional.empty();
     }
 
     /** The unit with this symbol; for units defined in code, where a miss is a programming error. */
@@ -128,6 +170,17 @@ public final class Units {
         return Collections.unmodifiableList(symbols);
     }
 
+    /** Every accepted shorthand of one dimension, written with {@code *} (a {@code -} may stand for it). */
+    public static List<String> shorthandOf(Dimension dimension) {
+        List<String> symbols = new ArrayList<>();
+        ALIASES.forEach((alias, unit) -> {
+            if (unit.dimension() == dimension) {
+                symbols.add(alias);
+            }
+        });
+        return Collections.unmodifiableList(symbols);
+    }
+
     /** Every accepted symbol, for suggestions. */
     public static List<String> allSymbols() {
         return List.copyOf(BY_SYMBOL.keySet());
@@ -136,8 +189,12 @@ public final class Units {
     /** A case-insensitive match, for a "did you mean" when the case is all that is wrong. */
     public static Optional<Unit> findIgnoringCase(String symbol) {
         String wanted = symbol.replace('-', '*').toLowerCase(Locale.ROOT);
-        return BY_SYMBOL.values().stream()
+        Optional<Unit> unit = BY_SYMBOL.values().stream()
                 .filter(u -> u.symbol().toLowerCase(Locale.ROOT).equals(wanted))
                 .findFirst();
+        return unit.or(() -> ALIASES.entrySet().stream()
+                .filter(e -> e.getKey().toLowerCase(Locale.ROOT).equals(wanted))
+                .map(Map.Entry::getValue)
+                .findFirst());
     }
 }
