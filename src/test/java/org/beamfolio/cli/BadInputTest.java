@@ -20,7 +20,8 @@ import org.junit.jupiter.params.provider.MethodSource;
 
 /**
  * Every file in test resources bad-jobs/ holds one mistake and names, on its first line, the
- * message it must get ("# expect: key.path: words"). Each must give exit status 2, a located
+ * message it must get ("# expect: key.path: words"); a second line "# messages: n" says how many
+ * located messages it gets in all (one, where a follow-on message would mislead). Each must give exit status 2, a located
  * message file:line:column: key.path: ..., the offending line with a caret, no stack trace, and
  * no file written: an earlier package of the same name stays byte for byte.
  */
@@ -60,6 +61,12 @@ class BadInputTest {
         assertEquals(Main.BAD_INPUT, run.status(), run.err());
         Pattern located = Pattern.compile("(?m)^" + Pattern.quote(job.toString()) + ":(\\d+):(\\d+): " + Pattern.quote(expected));
         assertTrue(located.matcher(run.err()).find(), () -> "expected\n  " + expected + "\ngot\n" + run.err());
+        List<String> header = new String(bytes, StandardCharsets.ISO_8859_1).lines().limit(2).toList();
+        if (header.size() > 1 && header.get(1).startsWith("# messages: ")) {
+            int count = Integer.parseInt(header.get(1).substring("# messages: ".length()).strip());
+            Pattern anyLocated = Pattern.compile("(?m)^" + Pattern.quote(job.toString()) + ":\\d+:\\d+: ");
+            assertEquals(count, anyLocated.matcher(run.err()).results().count(), run::err);
+        }
         assertTrue(run.err().contains("^"), "the offending line is shown with a caret");
         assertFalse(run.err().contains("Exception") || run.err().contains("\tat "), "no stack trace");
         assertArrayEquals(earlier, Files.readAllBytes(out.resolve(jobName + ".pdf")), "the earlier package is untouched");

@@ -1,5 +1,6 @@
 package org.beamfolio.job;
 
+import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -77,17 +78,43 @@ class JobSchemaTest {
                 .get("definitions");
         for (Map.Entry<Dimension, String> e : names.entrySet()) {
             java.util.regex.Pattern pattern = java.util.regex.Pattern.compile(definitions.get(e.getValue()).get("pattern").asText());
-            for (String unit : Units.symbolsOf(e.getKey())) {
+            List<String> spellings = new java.util.ArrayList<>(Units.symbolsOf(e.getKey()));
+            spellings.addAll(Units.shorthandOf(e.getKey()));
+            for (String unit : spellings) {
                 assertTrue(pattern.matcher("12.5 " + unit).matches(), e.getValue() + " accepts " + unit);
+                assertTrue(pattern.matcher("12.5 " + unit.replace('*', '-')).matches(), e.getValue() + " accepts " + unit.replace('*', '-'));
             }
             assertFalse(pattern.matcher("12.5").matches(), e.getValue() + " refuses a bare number");
         }
     }
 
+    /** Lengths and shorthand the schema and the tool both take, and near misses both refuse. */
+    @ParameterizedTest(name = "{0}")
+    @ValueSource(strings = {"9'-6\"", "9' 6\"", "9'6\"", "9'", "6\"", "9 ft 6 in", "9ft 6in", "9 ft-6 in", "-9'-6 1/2\"",
+        "9'-6-1/2\"", "6 1/2\"", "3/4 in", "2.5' 3.25\"", "24 ft", "1e3 mm", "-2 m",
+        "9'-6", "9' 6", "6 1/0\"", "9 ft 6", "'9", "1/2 ft", "9'-'6\"", "9 feet", "4 meters", "9'-6\" 3", "2 k", "ft"})
+    void theSchemaTakesExactlyTheLengthsTheToolTakes(String text) throws Exception {
+        java.util.regex.Pattern pattern = java.util.regex.Pattern.compile(new ObjectMapper()
+                .readTree(JobSchemaTest.class.getResourceAsStream("/schema/job-format-1.schema.json"))
+                .get("definitions").get("length").get("pattern").asText());
+        assertEquals(org.beamfolio.units.QuantityParser.parse(text, Dimension.LENGTH).ok(), pattern.matcher(text).matches(), text);
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @ValueSource(strings = {"3 ft-kip", "3 k-ft", "3 kip-ft", "3 ft-lb", "3 lb-ft", "3 in-kip", "2 kNm", "3 kip-fet", "3 ft-kips", "3 ft"})
+    void theSchemaTakesExactlyTheMomentsTheToolTakes(String text) throws Exception {
+        java.util.regex.Pattern pattern = java.util.regex.Pattern.compile(new ObjectMapper()
+                .readTree(JobSchemaTest.class.getResourceAsStream("/schema/job-format-1.schema.json"))
+                .get("definitions").get("moment").get("pattern").asText());
+        assertEquals(org.beamfolio.units.QuantityParser.parse(text, Dimension.MOMENT).ok(), pattern.matcher(text).matches(), text);
+    }
+
     static final List<String> BOTH_REJECT = List.of("bare-number-length", "unknown-unit", "wrong-dimension", "unknown-support-kind",
             "unknown-load-kind", "unknown-shape", "missing-load-case", "missing-point-position", "misspelt-key", "misspelt-top-key",
             "missing-version", "wrong-version", "unknown-builtin-set", "factor-not-number", "moment-without-sense", "spring-without-k",
-            "deflection-limit-bad", "linear-one-intensity", "list-where-mapping", "top-level-list");
+            "deflection-limit-bad", "linear-one-intensity", "list-where-mapping", "top-level-list", "us-kip-as-length",
+            "us-misspelt-kip", "us-feet-and-inches-as-force", "us-fraction-zero-denominator", "follow-on-material-fails",
+            "follow-on-load-fails");
 
     @Test
     void theSchemaAndTheToolRejectTheSameMistakes() throws Exception {
