@@ -87,7 +87,7 @@ final class BuildCommand implements Callable<Integer> {
                     stderr.print("\r\u001b[K");
                 }
                 outcome.messages().forEach(stderr::print);
-                if (outcome.status() == Main.OK) {
+                if (outcome.pdf() != null) {
                     stdout.println("wrote " + outcome.pdf() + " and " + outcome.results());
                     table.add(new String[] {JobReader.jobName(file), Integer.toString(outcome.pages()),
                             Double.isNaN(outcome.governingRatio()) ? "-" : Numbers.format(outcome.governingRatio()),

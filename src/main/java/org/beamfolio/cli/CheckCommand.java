@@ -36,7 +36,7 @@ final class CheckCommand implements Callable<Integer> {
             if (solved.status() == Main.OK) {
                 stdout.print(Summary.of(solved.result(), solved.checks()));
             }
-            status.add(solved.status());
+            status.add(solved.statusWithChecks());
         }
         stdout.flush();
         stderr.flush();

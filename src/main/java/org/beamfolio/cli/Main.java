@@ -9,17 +9,24 @@ import picocli.CommandLine.Command;
 
 /**
  * The command line. {@link #run} takes its streams and returns the exit status, so tests run it
- * in-process: 0 when every package was written (or every job checked), 2 when any input was
- * invalid (nothing is written for that job), 1 on an internal failure.
+ * in-process: 0 when every package was written (or every job checked) and meets every check, 3 when
+ * every package was written but some check does not meet its limit, 2 when any input was invalid
+ * (nothing is written for that job), 1 on an internal failure. See {@link ExitStatus} for which wins.
  */
 @Command(name = "beamfolio", mixinStandardHelpOptions = true, versionProvider = Main.VersionProvider.class,
         description = "Exact beam analysis and calculation packages for structural engineers.",
+        exitCodeListHeading = "%nExit status (over several jobs the first that applies, in this order: 1, 2, 3, 0):%n",
+        exitCodeList = {"0:every package written (or job checked); every check meets its limit",
+                "3:every package written (or job checked); some check does not meet its limit",
+                "2:invalid input; nothing written for that job", "1:internal failure; nothing half-written"},
         subcommands = {BuildCommand.class, CheckCommand.class, NewCommand.class, SealCommand.class, VerifyCommand.class,
                 CommandLine.HelpCommand.class})
 public final class Main implements Runnable {
     public static final int OK = 0;
     public static final int INTERNAL_FAILURE = 1;
     public static final int BAD_INPUT = 2;
+    /** The package was written (or the job checked), and at least one check does not meet its limit. */
+    public static final int CHECKS_FAIL = 3;
 
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;

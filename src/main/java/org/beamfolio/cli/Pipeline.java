@@ -74,7 +74,12 @@ final class Pipeline {
     }
 
     /** The job read and solved, or the messages that say why it cannot be. */
-    record Solved(AnalysisResult result, List<CheckOutcome> checks, List<String> messages, int status) {}
+    record Solved(AnalysisResult result, List<CheckOutcome> checks, List<String> messages, int status) {
+        /** {@link Main#CHECKS_FAIL} for a solved job with a check that does not meet its limit, else the status. */
+        int statusWithChecks() {
+            return status == Main.OK && !checks.stream().allMatch(CheckOutcome::pass) ? Main.CHECKS_FAIL : status;
+        }
+    }
 
     Solved solve(Path file) {
         JobReading reading = JobReader.read(file);
@@ -138,6 +143,12 @@ final class Pipeline {
         }
         double ratio = solved.checks().stream().mapToDouble(CheckOutcome::ratio).max().orElse(Double.NaN);
         boolean pass = solved.checks().stream().allMatch(CheckOutcome::pass);
-        return new Outcome(Main.OK, messages, pdf, results, pages(document), ratio, pass);
+        if (!pass) {
+            messages.add(file + ": the package was written, but it DOES NOT MEET "
+                    + String.join(", ", solved.checks().stream().filter(c -> !c.pass())
+                            .map(c -> c.id() + " (ratio " + org.beamfolio.units.Numbers.format(c.ratio()) + ")").toList())
+                    + "; it is marked as failing\n");
+        }
+        return new Outcome(pass ? Main.OK : Main.CHECKS_FAIL, messages, pdf, results, pages(document), ratio, pass);
     }
 }

@@ -47,6 +47,15 @@ final class SealCommand implements Callable<Integer> {
     @Option(names = "--out", paramLabel = "FILE", description = "write the sealed package here (default: replace PACKAGE.pdf)")
     Path out;
 
+    @Option(names = "--licence", paramLabel = "NUMBER", description = "the engineer's licence number, printed in the seal")
+    String licence;
+
+    @Option(names = "--image", paramLabel = "PNG", description = "the engineer's seal image, placed in the seal box (transparency is flattened onto white)")
+    Path image;
+
+    @Option(names = "--accept-failing", description = "seal a package whose checks do not all meet their limits; the seal then says so")
+    boolean acceptFailing;
+
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
 
@@ -60,15 +69,20 @@ final class SealCommand implements Callable<Integer> {
             stderr.println("beamfolio seal: no package " + pdf);
             return Main.BAD_INPUT;
         }
+        if (image != null && !Files.isRegularFile(image)) {
+            stderr.println("beamfolio seal: no seal image " + image + " (the package is unchanged)");
+            return Main.BAD_INPUT;
+        }
         char[] password = password(stderr);
         if (password == null) {
             return Main.BAD_INPUT;
         }
         byte[] original = Files.readAllBytes(pdf);
-        byte[] sealed;
+        Sealer.Sealed sealed;
         try {
-            sealed = Sealer.seal(original, new Path12(keystore), password, new Sealer.Request(alias, reason, location, sheet),
-                    Calendar.getInstance(TimeZone.getTimeZone("UTC")));
+            Sealer.Request request = new Sealer.Request(alias, reason, location, sheet, licence,
+                    image == null ? null : Files.readAllBytes(image), acceptFailing);
+            sealed = Sealer.seal(original, new Path12(keystore), password, request, Calendar.getInstance(TimeZone.getTimeZone("UTC")));
         } catch (SealException e) {
             stderr.println("beamfolio seal: " + pdf + ": " + e.getMessage() + " (the package is unchanged)");
             return Main.BAD_INPUT;
@@ -76,7 +90,8 @@ final class SealCommand implements Callable<Integer> {
             java.util.Arrays.fill(password, '\0');
         }
         Path target = out != null ? out : pdf;
-        AtomicFiles.writeTogether(List.of(target), List.of(sealed));
+        sealed.warnings().forEach(w -> stderr.println("beamfolio seal: warning: " + w));
+        AtomicFiles.writeTogether(List.of(target), List.of(sealed.pdf()));
         spec.commandLine().getOut().println("sealed " + target);
         return Main.OK;
     }

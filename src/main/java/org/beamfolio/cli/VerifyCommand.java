@@ -5,6 +5,7 @@ import java.io.PrintWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
+import org.beamfolio.report.pdf.ChecksFlag;
 import org.beamfolio.seal.SealException;
 import org.beamfolio.seal.Verifier;
 import picocli.CommandLine;
@@ -44,8 +45,24 @@ final class VerifyCommand implements Callable<Integer> {
         }
         out.println("  job file digest:     " + (r.attachedDigest() != null && r.attachedDigest().equals(r.printedDigest())
                 ? "attached file matches the printed SHA-256 " + r.printedDigest() : "MISMATCH or missing"));
+        out.println("  checks:              " + checks(r.checksFlag()));
+        if (r.sealed()) {
+            out.println("  certificate:         " + (r.certificateConcerns().isEmpty()
+                    ? "issued by a certification authority the system trusts" : "NOT vouched for by a trusted authority"));
+            r.certificateConcerns().forEach(c -> out.println("  warning: " + c));
+        }
         r.problems().forEach(p -> out.println("  problem: " + p));
         out.println(r.intact() ? "  verdict: intact" : "  verdict: NOT intact");
         return r.intact() ? Main.OK : Main.BAD_INPUT;
+    }
+
+    private static String checks(String flag) {
+        if (flag == null) {
+            return "not recorded in the package";
+        }
+        if (ChecksFlag.failing(flag)) {
+            return "FAIL, the package has checks that do not meet their limits: " + flag.substring("fail: ".length());
+        }
+        return flag.equals("pass") ? "every check meets its limit" : "no checks were requested";
     }
 }

@@ -123,6 +123,8 @@ public final class PackageRenderer {
         String xhtml = xhtml(built.model());
         PdfRenderer.Attachment job = new PdfRenderer.Attachment(result.job().name() + ".yaml",
                 result.job().sourceBytes(), "Job file of this calculation package");
-        return ready(pdf).render(xhtml, built.drawings(), job, result.job().project().date(), archival, result.job().project().title());
+        String flag = org.beamfolio.report.pdf.ChecksFlag.of(!checks.isEmpty(), checks.stream().filter(c -> !c.pass()).map(CheckOutcome::id).toList());
+        return ready(pdf).render(xhtml, built.drawings(), job, result.job().project().date(), archival, result.job().project().title(),
+                flag);
     }
 }

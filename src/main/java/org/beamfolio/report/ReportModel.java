@@ -49,7 +49,8 @@ public record ReportModel(Sheet sheet, Cover cover, Revision revision, Basis bas
 
     public record Stresses(List<SectionSheet> sections, List<Equation> equations) {}
 
-    public record Checks(Table table, String governing, boolean allPass, boolean any) {}
+    /** @param failing one line per check that does not meet its limit (id, what, ratio, demand and limit); empty when all pass */
+    public record Checks(Table table, String governing, boolean allPass, boolean any, List<String> failing) {}
 
     /** What changed since the previous revision; null without {@code --previous}. */
     public record Revision(String revisions, Table inputs, Table results, Table checks) {}

@@ -197,7 +197,16 @@ final class ReportModelBuilder {
                         + t.len(c.at()) + ". " + (allPass ? "Every check meets its limit." : "At least one check EXCEEDS its limit."))
                 .orElse("No checks were requested in the job file.");
         return new ReportModel.Checks(new ReportModel.Table(List.of("Check", "What is checked", "Demand", "Limit", "Ratio",
-                "Result", "Combination", "At"), rows), governing, allPass, !checks.isEmpty());
+                "Result", "Combination", "At"), rows), governing, allPass, !checks.isEmpty(), failing(checks));
+    }
+
+    /** What the cover and the checks sheet state for each check that does not meet its limit. */
+    private List<String> failing(List<CheckOutcome> checks) {
+        return checks.stream().filter(c -> !c.pass())
+                .map(c -> c.id() + ", " + c.description() + ": ratio " + Numbers.format(c.ratio()) + " (demand "
+                        + Numbers.format(c.demand(), c.unit()) + " against a limit of " + Numbers.format(c.limit(), c.unit())
+                        + ") under " + c.combination() + " at " + t.len(c.at()))
+                .toList();
     }
 
     private List<String> cautions() {

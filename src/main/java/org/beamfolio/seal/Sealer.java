@@ -28,6 +28,7 @@ import java.util.Collections;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import org.beamfolio.report.pdf.ChecksFlag;
 import org.bouncycastle.asn1.ASN1EncodableVector;
 import org.bouncycastle.asn1.DERSet;
 import org.bouncycastle.asn1.cms.Attribute;
@@ -55,10 +56,31 @@ public final class Sealer {
 
     private Sealer() {}
 
-    /** The seal's details: reason and location are printed with it; sheet 0 means the cover's seal box. */
-    public record Request(String alias, String reason, String location, int sheet) {}
+    /**
+     * The seal's details: reason, location and licence number are printed with it; sheet 0 means
+     * the cover's seal box; {@code image} is the engineer's seal as PNG bytes (or null);
+     * {@code acceptFailing} seals a package whose checks do not all meet their limits.
+     */
+    public record Request(String alias, String reason, String location, int sheet, String licence, byte[] image,
+                          boolean acceptFailing) {
+        public Request(String alias, String reason, String location, int sheet) {
+            this(alias, reason, location, sheet, null, null, false);
+        }
+    }
 
-    public static byte[] seal(byte[] pdf, Path12 keystore, char[] password, Request request, Calendar now) throws SealException {
+    /** The sealed package and what the engineer should know about it (printed as warnings). */
+    public record Sealed(byte[] pdf, List<String> warnings) {}
+
+    public static Sealed seal(byte[] pdf, Path12 keystore, char[] password, Request request, Calendar now) throws SealException {
+        String flag = checksFlag(pdf);
+        List<String> warnings = new ArrayList<>();
+        if (ChecksFlag.failing(flag) && !request.acceptFailing()) {
+            throw new SealException("the package's checks do not all meet their limits (" + flag
+                    + "); it is not sealed. Revise the design, or give --accept-failing to seal it marked as failing");
+        }
+        if (flag == null) {
+            warnings.add("the package carries no record of whether its checks pass (it was not built by this version); review its checks sheet");
+        }
         KeyStore store = keystore.load(password);
         String alias = request.alias();
         try {
@@ -88,7 +110,12 @@ public final class Sealer {
             } catch (CertificateNotYetValidException e) {
                 throw new SealException("the certificate of \"" + alias + "\" is not valid before " + certificate.getNotBefore().toInstant());
             }
-            return sign(pdf, key, chain, request, now);
+            List<X509Certificate> certificates = new ArrayList<>();
+            for (Certificate c : chain) {
+                certificates.add((X509Certificate) c);
+            }
+            warnings.addAll(CertificateTrust.concerns(certificates, now.getTime()));
+            return new Sealed(sign(pdf, key, chain, request, now, ChecksFlag.failing(flag) ? flag : null), warnings);
         } catch (UnrecoverableKeyException e) {
             throw new SealException("the password does not open the key \"" + alias + "\"");
         } catch (GeneralSecurityException | IOException | com.lowagie.text.DocumentException e) {
@@ -96,7 +123,18 @@ public final class Sealer {
         }
     }
 
-    private static byte[] sign(byte[] pdf, PrivateKey key, Certificate[] chain, Request request, Calendar now)
+    /** The package's {@link ChecksFlag}, or null when it has none. */
+    static String checksFlag(byte[] pdf) throws SealException {
+        try {
+            PdfReader reader = new PdfReader(pdf);
+            return ChecksFlag.read(reader.getTrailer().getAsDict(PdfName.INFO));
+        } catch (IOException e) {
+            throw new SealException("not a readable PDF: " + e.getMessage(), e);
+        }
+    }
+
+    /** @param failing the checks flag of a package sealed although it fails, printed in the seal; else null */
+    private static byte[] sign(byte[] pdf, PrivateKey key, Certificate[] chain, Request request, Calendar now, String failing)
             throws IOException, com.lowagie.text.DocumentException, GeneralSecurityException, SealException {
         PdfReader reader = new PdfReader(pdf);
         AcroFields fields = reader.getAcroFields();
@@ -120,8 +158,15 @@ public final class Sealer {
         // archival PDF forbids a CIDSet that lists only the glyphs used
         font.setIncludeCidSet(false);
         appearance.setLayer2Font(new Font(font, 7));
-        appearance.setLayer2Text("Digitally sealed by\n" + signer + "\n" + new PdfDate(now).getW3CDate()
-                + (request.reason() == null ? "" : "\n" + request.reason()));
+        appearance.setLayer2Text("Digitally sealed by\n" + signer
+                + (request.licence() == null ? "" : "\nLicence No. " + request.licence())
+                + "\n" + new PdfDate(now).getW3CDate()
+                + (request.reason() == null ? "" : "\n" + request.reason())
+                + (failing == null ? "" : "\nSEALED WITH FAILING CHECKS (" + failing.substring("fail: ".length()) + ")"));
+        if (request.image() != null) {
+            appearance.setSignatureGraphic(SealImage.read(request.image()));
+            appearance.setRender(PdfSignatureAppearance.SignatureRenderGraphicAndDescription);
+        }
         if (request.sheet() > 0 || fields.getFieldNamesWithBlankSignatures().isEmpty()) {
             int sheet = Math.max(1, request.sheet());
             if (sheet > reader.getNumberOfPages()) {
@@ -133,6 +178,7 @@ public final class Sealer {
         } else {
             appearance.setVisibleSignature(org.beamfolio.report.drawing.SealBox.FIELD);
         }
+        whiteGround(appearance);
         PdfSignature dictionary = new PdfSignature(PdfName.ADOBE_PPKLITE, new PdfName("ETSI.CAdES.detached"));
         dictionary.setDate(new PdfDate(now));
         dictionary.setName(signer);
@@ -159,6 +205,18 @@ public final class Sealer {
         update.put(PdfName.CONTENTS, new PdfString(padded).setHexWriting(true));
         appearance.close(update);
         return out.toByteArray();
+    }
+
+    /**
+     * An opaque white ground under the seal, inset from the box's frame, so that the seal never
+     * prints over the placeholder words of an unsealed box.
+     */
+    private static void whiteGround(PdfSignatureAppearance appearance) {
+        com.lowagie.text.pdf.PdfTemplate ground = appearance.getLayer(0);
+        com.lowagie.text.Rectangle box = appearance.getRect();
+        ground.setRGBColorFill(255, 255, 255);
+        ground.rectangle(2, 2, box.getWidth() - 4, box.getHeight() - 4);
+        ground.fill();
     }
 
     /** A detached CMS signature with the ESS signing-certificate-v2 attribute (CAdES-BES). */

@@ -15,6 +15,7 @@ import java.util.HexFormat;
 import java.util.List;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
+import org.beamfolio.report.pdf.ChecksFlag;
 import org.bouncycastle.cert.X509CertificateHolder;
 import org.bouncycastle.cert.jcajce.JcaX509CertificateConverter;
 import org.bouncycastle.cms.CMSProcessableByteArray;
@@ -34,8 +35,13 @@ public final class Verifier {
     private Verifier() {}
 
     /** What verification found; {@code intact} is the overall verdict. */
+    /**
+     * @param checksFlag the package's {@link ChecksFlag} ({@code pass}, {@code fail: ...}, {@code none}), null when it has none
+     * @param certificateConcerns why the seal's certificate is not vouched for by an authority the system trusts; empty when it is
+     */
     public record Report(boolean sealed, boolean signatureValid, boolean coversWholeFile, String signer, String when,
-                         String printedDigest, String attachedDigest, List<String> problems) {
+                         String printedDigest, String attachedDigest, List<String> problems, String checksFlag,
+                         List<String> certificateConcerns) {
         public boolean intact() {
             return sealed && signatureValid && coversWholeFile && printedDigest != null && printedDigest.equals(attachedDigest)
                     && problems.isEmpty();
@@ -50,6 +56,7 @@ public final class Verifier {
         } catch (IOException e) {
             throw new SealException("not a readable PDF: " + e.getMessage(), e);
         }
+        String flag = ChecksFlag.read(reader.getTrailer().getAsDict(PdfName.INFO));
         String printed = printedDigest(reader);
         String attached = attachedDigest(reader);
         if (printed == null) {
@@ -64,7 +71,7 @@ public final class Verifier {
         List<String> names = new ArrayList<>(fields.getSignatureTypes().keySet());
         names.removeAll(fields.getFieldNamesWithBlankSignatures());
         if (names.isEmpty()) {
-            return new Report(false, false, false, null, null, printed, attached, problems);
+            return new Report(false, false, false, null, null, printed, attached, problems, flag, List.of());
         }
         PdfDictionary signature = fields.getSignatureDictionary(names.get(0));
         PdfArray range = signature.getAsArray(PdfName.BYTERANGE);
@@ -80,6 +87,8 @@ public final class Verifier {
         boolean inside = r[1] <= pdf.length && r[2] + r[3] <= pdf.length;
         boolean valid = false;
         String signer = null;
+        List<String> concerns = List.of();
+        PdfString date = signature.getAsString(PdfName.M);
         if (inside) {
             System.arraycopy(pdf, 0, signed, 0, (int) r[1]);
             System.arraycopy(pdf, (int) r[2], signed, (int) r[1], (int) r[3]);
@@ -92,6 +101,12 @@ public final class Verifier {
                     X509Certificate certificate = new JcaX509CertificateConverter().getCertificate(holder);
                     valid = info.verify(new JcaSimpleSignerInfoVerifierBuilder().build(certificate));
                     signer = Names.commonName(certificate);
+                    List<X509Certificate> carried = new ArrayList<>();
+                    for (Object h : cms.getCertificates().getMatches(null)) {
+                        carried.add(new JcaX509CertificateConverter().getCertificate((X509CertificateHolder) h));
+                    }
+                    concerns = CertificateTrust.concerns(CertificateTrust.chain(certificate, carried),
+                            date == null ? new java.util.Date() : com.lowagie.text.pdf.PdfDate.decode(date.toString()).getTime());
                 }
             } catch (Exception e) {
                 problems.add("the signature cannot be checked: " + e.getMessage());
@@ -100,9 +115,8 @@ public final class Verifier {
         if (!valid) {
             problems.add("the signature does not match the sealed bytes: the package was changed after sealing");
         }
-        PdfString date = signature.getAsString(PdfName.M);
         return new Report(true, valid, whole, signer, date == null ? null : com.lowagie.text.pdf.PdfDate.getW3CDate(date.toString()),
-                printed, attached, problems);
+                printed, attached, problems, flag, concerns);
     }
 
     private static String printedDigest(PdfReader reader) {

@@ -1,6 +1,7 @@
 package org.beamfolio.properties;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -27,7 +28,9 @@ class RandomPackagesTest {
                 java.io.ByteArrayOutputStream err = new java.io.ByteArrayOutputStream();
                 int status = Main.run(new String[] {"build", job.toString(), "--out", temp.resolve("out").toString(), "--csv"},
                         new java.io.PrintStream(java.io.OutputStream.nullOutputStream()), new java.io.PrintStream(err, true));
-                assertEquals(Main.OK, status, err.toString());
+                // a random beam may well exceed its allowables: the package is then written and flagged
+                assertTrue(status == Main.OK || status == Main.CHECKS_FAIL, "status " + status + ": " + err);
+                assertTrue(java.nio.file.Files.exists(temp.resolve("out/random.pdf")), "the package is written either way");
             } catch (java.io.IOException e) {
                 throw new java.io.UncheckedIOException(e);
             }

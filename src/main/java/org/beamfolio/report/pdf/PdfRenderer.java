@@ -89,6 +89,12 @@ public final class PdfRenderer {
      */
     public byte[] render(String xhtml, Map<String, Drawing> drawings, Attachment attachment, String isoDate, boolean archival,
                          String title) {
+        return render(xhtml, drawings, attachment, isoDate, archival, title, null);
+    }
+
+    /** @param checksFlag the package's {@link ChecksFlag}, written to the document information; null for none */
+    public byte[] render(String xhtml, Map<String, Drawing> drawings, Attachment attachment, String isoDate, boolean archival,
+                         String title, String checksFlag) {
         try {
             ITextRenderer renderer = new ITextRenderer(fonts.resolver());
             fonts.prefixesFrom(seeded(xhtml));
@@ -101,6 +107,7 @@ public final class PdfRenderer {
                     PdfWriter writer = r.getWriter();
                     writer.getInfo().put(PdfName.CREATIONDATE, new PdfDate(date));
                     writer.getInfo().put(PdfName.MODDATE, new PdfDate(date));
+                    ChecksFlag.write(writer.getInfo(), checksFlag);
                     try {
                         if (archival) {
                             PdfA.outputIntent(writer);
