@@ -51,6 +51,33 @@ class StressChecksTest {
     }
 
     @Test
+    void shearStressAtTheNeutralAxisOfTheTeeAgainstTheShearAllowable() {
+        // The same two spans, l = 3 m, w = 10 kN/m: the largest shear is 5wl/8 = 18.75 kN each side
+        // of the interior support (AISC Manual Table 3-23, two equal spans). Shear formula
+        // f_v = V Q / (I t) (elementary beam theory, common practice) at the neutral axis, which
+        // lies y = 158.97 mm from the stem's free end (flange-down centroid, as above). Q is the
+        // first moment of the stem below it about it: t y^2 / 2 = 10 mm * (158.97 mm)^2 / 2;
+        // t = 10 mm, the stem. Against the test material's shear allowable of 100 MPa (its tension
+        // allowable is 165 MPa: the ratio tells which one the check used).
+        String text = TestJobs.text("6 m", "    - { at: 0 m, type: pin }\n    - { at: 3 m, type: roller }\n    - { at: 6 m, type: roller }\n",
+                        "  - { case: D, type: uniform, w: 10 kN/m }\n")
+                .replace("  section: s\n", "  section: tee\n").replace("sections:\n", "sections:\n" + TEE)
+                + "checks:\n  stress: true\n";
+        List<CheckOutcome> checks = Checks.run(TestJobs.solve(text));
+        double y = (1800 * 90.0 + 4000 * 190.0) / 5800 * 1e-3;
+        double i = (10 * Math.pow(180, 3) / 12 + 1800 * Math.pow(90 - y * 1e3, 2) + 200 * Math.pow(20, 3) / 12
+                + 4000 * Math.pow(190 - y * 1e3, 2)) * 1e-12;
+        double q = 0.010 * y * y / 2;
+        double v = 5 * 10e3 * 3 / 8;
+        double fv = v * q / (i * 0.010) / 1e6;
+        CheckOutcome shear = find(checks, "stress-shear");
+        assertEquals(fv, shear.demand(), 1e-9 * fv, "MPa, V Q / (I t)");
+        assertEquals(100, shear.limit(), 1e-12, "the shear allowable, not the tension or compression one");
+        assertEquals(fv / 100, shear.ratio(), 1e-12);
+        assertEquals(3.0, shear.at(), 1e-9, "beside the interior support");
+    }
+
+    @Test
     void steppedCantileverDeflectionByTheUnitLoadMethod() {
         // Cantilever L = 6 m fixed at 0, EI1 over [0, 2 m], EI2 over [2 m, 6 m], P at the tip.
         // Unit load method by hand: delta = P (L^3 - (L - a)^3) / (3 EI1) + P (L - a)^3 / (3 EI2).

@@ -137,7 +137,12 @@ class BuildCommandTest {
         // the simple span under 10 kN/m and 20 kN at 2 m: V(0) = 30 + 20 * 4 / 6 kN in D + L (statics)
         String first = lines.stream().filter(l -> l.startsWith("D + L,0.0,")).findFirst().orElseThrow();
         assertEquals(30 + 20.0 * 4 / 6, Double.parseDouble(first.split(",")[2]), 1e-9);
-        assertFalse(Files.exists(temp.resolve("a-job-without-csv.csv")));
+        Path plain = temp.resolve("plain");
+        assertEquals(Main.OK, Run.of("build", job.toString(), "--out", plain.toString()).status());
+        try (var files = Files.list(plain)) {
+            assertEquals(List.of("ordinates.pdf", "ordinates.results.json"),
+                    files.map(p -> p.getFileName().toString()).sorted().toList(), "without --csv, no CSV beside the package");
+        }
     }
 
     @Test

@@ -28,8 +28,16 @@ class RevisionDeltaTest {
             assertTrue(text.contains("Changes since the previous revision"));
             assertTrue(text.contains("loads[1].w 750 lb/ft 900 lb/ft"), "the changed load");
             assertTrue(text.contains("project.revision A B"));
-            // the live load grew by 150 lb/ft: the largest moment grows by 150 * 24^2 / 8 = 10,800 lb*ft (statics)
             assertTrue(text.contains("92,886 lb·ft at 11.35 ft"), "previous moment");
+            // The live load grew by 150 lb/ft. By statics, D + L is w = 375 + 900 + 36.73 lb/ft (self
+            // weight: A = 2 * 6.73 * 0.505 + 12.89 * 0.31 = 10.79 in^2 at 490 pcf) and 2 kip at 9 ft on
+            // 24 ft: R_A = 12 w + 2000 * 15 / 24, zero shear at x0 = 12 - 750 / w ft, and
+            // M = R_A x0 - w x0^2 / 2 - 2000 (x0 - 9).
+            double w = 375 + 900 + 490 * (2 * 6.73 * 0.505 + (13.9 - 2 * 0.505) * 0.31) / 144;
+            double x0 = 12 - 750 / w;
+            double moment = (12 * w + 2000.0 * 15 / 24) * x0 - w * x0 * x0 / 2 - 2000 * (x0 - 9);
+            String current = org.beamfolio.units.Numbers.format(moment) + " lb·ft at " + org.beamfolio.units.Numbers.format(x0) + " ft";
+            assertTrue(text.contains("92,886 lb·ft at 11.35 ft " + current), "the moment before and after: " + current + " in\n" + text);
             assertTrue(text.contains("stress-tension 0.7165"), "previous check ratio");
         }
     }

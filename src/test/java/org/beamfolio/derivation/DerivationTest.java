@@ -180,13 +180,43 @@ class DerivationTest {
 
     @Test
     void areaMethodTableAddsUp() {
+        // The printed table itself, read back: each row re-adds (V right - load = V left, M at From +
+        // area = M at To), one row's end carries on into the next across each step, and the numbers
+        // agree with statics by hand for the simple span of LOADS (6 m, kN and m):
+        //   R_A = (10 * 6 * 3 + 25 * 3.5 + 7.2 * 1.2 - 8) / 6 = 44.69 kN, moments about B; the linear
+        //   load 0..6 kN/m over 3.2..5.6 m is 7.2 kN at 4.8 m; the clockwise couple lowers R_A.
+        //   M(2.5 m) = 44.69 * 2.5 - 10 * 2.5^2 / 2 + 8 = 88.475 kN*m (the couple at 1.3 m steps M up by 8).
         AnalysisResult r = TestJobs.solve(TestJobs.text("6 m", "    - { at: 0 m, type: pin }\n    - { at: 6 m, type: roller }\n", LOADS));
         CombinationResult c = r.combinations().get(0);
-        var v = c.response().shear();
-        var m = c.response().moment();
-        // the moment at the right end is the sum of all the shear areas plus the couples' steps (zero at a roller end)
-        double sum = AreaMethod.shearArea(v, 0, 6);
-        double couples = FactoredLoads.of(r, c).stream().filter(l -> l instanceof Load.Couple).mapToDouble(l -> -((Load.Couple) l).M()).sum();
-        assertEquals(m.leftOf(6), m.at(0) + sum + couples, 1e-9 * Math.abs(m.max().value()));
+        List<List<String>> rows = new AreaMethod(r, c, FactoredLoads.of(r, c), new Notation(r), new Steps()).rows();
+        List<double[]> table = rows.stream().map(row -> row.stream().mapToDouble(DerivationTest::printed).toArray()).toList();
+        double vScale = table.stream().mapToDouble(t -> Math.max(Math.abs(t[3]), Math.abs(t[5]))).max().orElseThrow();
+        double mScale = table.stream().mapToDouble(t -> Math.max(Math.abs(t[6]), Math.abs(t[8]))).max().orElseThrow();
+        // four significant figures on the page: a sum of two printed numbers is good to about 1e-3 of the column
+        double vTol = 1e-3 * vScale;
+        double mTol = 1e-3 * mScale;
+        for (int k = 0; k < table.size(); k++) {
+            double[] t = table.get(k);
+            assertEquals(t[5], t[3] + t[4], vTol, "row " + k + ": V left of To = V right of From - load");
+            assertEquals(t[8], t[6] + t[7], mTol, "row " + k + ": M at To = M at From + area of V");
+            if (k + 1 < table.size()) {
+                double[] next = table.get(k + 1);
+                assertEquals(t[1], next[0], 1e-12, "rows follow on");
+                assertEquals(next[3], t[5] + next[2], vTol, "row " + (k + 1) + ": V right = V left of the previous row + the step");
+                double couple = Math.abs(next[0] - 1.3) < 1e-9 ? 8 : 0;
+                assertEquals(next[6], t[8] + couple, mTol, "row " + (k + 1) + ": M carries on (stepped by a couple only)");
+            }
+        }
+        double ra = (10 * 6 * 3 + 25 * 3.5 + 7.2 * 1.2 - 8) / 6;
+        assertEquals(0, table.get(0)[0], 0);
+        assertEquals(ra, table.get(0)[2], 0.01, "the first step is R_A");
+        double[] toPointLoad = table.stream().filter(t -> Math.abs(t[1] - 2.5) < 1e-9).findFirst().orElseThrow();
+        assertEquals(ra * 2.5 - 10 * 2.5 * 2.5 / 2 + 8, toPointLoad[8], 0.01, "M at the point load");
+        assertEquals(0, table.get(table.size() - 1)[8], mTol, "no moment at the roller end");
+    }
+
+    /** A number as the table prints it (4 significant figures, thousands grouped, minus as a hyphen or U+2212). */
+    private static double printed(String cell) {
+        return Double.parseDouble(cell.replace(",", "").replace("\u2212", "-"));
     }
 }

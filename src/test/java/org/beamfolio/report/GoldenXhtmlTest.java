@@ -2,6 +2,7 @@ package org.beamfolio.report;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
+import static org.junit.jupiter.api.Assertions.fail;
 
 import java.io.IOException;
 import java.nio.file.Files;
@@ -18,7 +19,8 @@ import org.junit.jupiter.params.provider.MethodSource;
 /**
  * The package's XHTML, before layout, compared as text with golden files in
  * src/test/resources/golden/ (one per example job named there). Regenerate after an intended
- * change with {@code ./mvnw verify -Dbeamfolio.golden.write=true} and review the diff.
+ * change with {@code ./mvnw verify -Dbeamfolio.golden.write=true}: each file that changes is
+ * rewritten and its test fails, so that the diff is reviewed; run again without the property.
  */
 class GoldenXhtmlTest {
     static final Path GOLDEN = Path.of("src/test/resources/golden");
@@ -45,9 +47,12 @@ class GoldenXhtmlTest {
         AnalysisResult result = Analysis.run(reading.job());
         String xhtml = new PackageRenderer().xhtml(result, Checks.run(result));
         Path golden = GOLDEN.resolve(name + ".xhtml");
-        if (WRITE) {
+        String expected = Files.exists(golden) ? Files.readString(golden) : "";
+        if (WRITE && !expected.equals(xhtml)) {
+            // a rewrite is news to review, never a pass: this run fails, the next one (without the property) compares
             Files.writeString(golden, xhtml);
+            fail("rewrote " + golden + ": review its diff, then run the tests again without -Dbeamfolio.golden.write");
         }
-        assertEquals(Files.readString(golden), xhtml, "regenerate with -Dbeamfolio.golden.write=true if the change is intended");
+        assertEquals(expected, xhtml, "regenerate with -Dbeamfolio.golden.write=true if the change is intended");
     }
 }

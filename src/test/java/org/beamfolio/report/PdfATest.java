@@ -1,5 +1,6 @@
 package org.beamfolio.report;
 
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -65,7 +66,9 @@ class PdfATest {
             assertEquals(1, af.size(), "the job file is the one associated file");
             var spec = (org.apache.pdfbox.cos.COSDictionary) af.getObject(0);
             assertEquals("Source", spec.getNameAsString(COSName.getPDFName("AFRelationship")));
-            assertTrue(Files.readString(Path.of(job)).length() > 0);
+            var embedded = new org.apache.pdfbox.pdmodel.common.filespecification.PDComplexFileSpecification(spec).getEmbeddedFile();
+            assertEquals("application/x-yaml", embedded.getSubtype(), "the attachment's MIME type");
+            assertArrayEquals(Files.readAllBytes(Path.of(job)), embedded.toByteArray(), "the job file attached byte for byte");
         }
     }
 }
