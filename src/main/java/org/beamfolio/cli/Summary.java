@@ -66,7 +66,8 @@ final class Summary {
             out.append("  note: ").append(r.droppedCombinations().size()).append(" combinations of the set left out (listed in the package)\n");
         }
         if (checks.stream().anyMatch(c -> !c.pass())) {
-            out.append("  warning: at least one check exceeds its limit\n");
+            out.append("  DOES NOT MEET: ").append(String.join(", ", checks.stream().filter(c -> !c.pass()).map(CheckOutcome::id).toList()))
+                    .append(" exceed their limits (exit status 3)\n");
         }
         return out.toString();
     }

@@ -91,7 +91,9 @@ class FailingPackageTest {
             assertTrue(checksSheet.contains(BANNER) && checksSheet.contains("deflection-D+L-max,"), checksSheet);
             assertEquals("fail: deflection-D+L-max", doc.getDocumentInformation().getCustomMetadataValue("BeamfolioChecks"));
         }
-        assertEquals(Main.CHECKS_FAIL, Run.of("check", failingJob.toString()).status(), "check exits 3 too");
+        Run check = Run.of("check", failingJob.toString());
+        assertEquals(Main.CHECKS_FAIL, check.status(), "check exits 3 too");
+        assertTrue(check.out().contains("DOES NOT MEET: deflection-D+L-max"), check.out());
     }
 
     @Test
