@@ -61,18 +61,29 @@ public final class Analysis {
             source = "job file";
         }
         Stresses stresses = new Stresses(model);
+        List<AnalysisResult.Span> spans = Spans.of(job.beam());
+        Patterns patterns = patterns(job, model, loads, spans, cases);
+        ReactionEnvelope reactions = new ReactionEnvelope(model.supports().size());
         List<CombinationResult> results = new ArrayList<>();
         for (int i = 0; i < combinations.size(); i++) {
             Combination c = combinations.get(i);
-            Superposition sum = new Superposition(c.factors().size()).addCases(cases, c.factors());
-            results.add(result(model, stresses, sum, c.name(), c.factors(), references.get(i), "", List.of()));
+            results.add(result(model, stresses, reactions, patterns.terms(c.factors(), null), c.name(), c.factors(),
+                    references.get(i), "", List.of()));
         }
-        List<AnalysisResult.Span> spans = Spans.of(job.beam());
-        if (!job.pattern().isEmpty()) {
-            results.addAll(patterns(job, model, loads, spans, combinations, references, cases, stresses));
+        for (int i = 0; i < combinations.size(); i++) {
+            Combination c = combinations.get(i);
+            if (patterns.casesIn(c.factors()).isEmpty()) {
+                continue;
+            }
+            for (boolean[] loaded : patterns.arrangements()) {
+                results.add(result(model, stresses, reactions, patterns.terms(c.factors(), loaded),
+                        patterns.name(c.name(), c.factors(), loaded), c.factors(), references.get(i),
+                        patterns.describe(loaded), Patterns.regions(loaded)));
+            }
         }
         Extremes envelope = Envelope.of(results);
-        return new AnalysisResult(job, model, List.copyOf(loads), sections, cases, results, envelope, dropped, source, spans);
+        return new AnalysisResult(job, model, List.copyOf(loads), sections, cases, results, envelope, dropped, source, spans,
+                patterns, reactions);
     }
 
     private static Response solve(StructureModel model, List<Load> loads, String name, Job job) throws UnstableBeamException {
@@ -85,21 +96,17 @@ public final class Analysis {
         }
     }
 
-    private static CombinationResult result(StructureModel model, Stresses stresses, Superposition sum, String name,
-                                            Map<String, Double> factors, String reference, String arrangement, List<Integer> regions) {
+    private static CombinationResult result(StructureModel model, Stresses stresses, ReactionEnvelope reactions, Superposition sum,
+                                            String name, Map<String, Double> factors, String reference, String arrangement,
+                                            List<Integer> regions) {
+        reactions.accept(name, sum.reactionForces(model.supports().size()));
         return new CombinationResult(name, factors, reference, arrangement, regions, () -> sum.response(model, name),
                 stresses.extremes(sum, model.elementStarts(), model.elementEnds()));
     }
 
-    /**
-     * Each combination that carries a pattern case, again with that case on some regions only.
-     * Each region's share of a pattern case is solved once; an arrangement is the combination
-     * less the full pattern case plus the loaded regions' shares.
-     */
-    private static List<CombinationResult> patterns(Job job, StructureModel model, List<Load> loads,
-                                                    List<AnalysisResult.Span> spans, List<Combination> combinations,
-                                                    List<String> references, Map<String, Response> cases,
-                                                    Stresses stresses) throws UnstableBeamException {
+    /** Each pattern case's share on each region, solved once. */
+    private static Patterns patterns(Job job, StructureModel model, List<Load> loads, List<AnalysisResult.Span> spans,
+                                     Map<String, Response> cases) throws UnstableBeamException {
         Map<String, Response[]> shares = new LinkedHashMap<>();
         for (String p : job.pattern()) {
             List<Load> ofCase = loads.stream().filter(l -> l.loadCase().equals(p)).toList();
@@ -110,58 +117,6 @@ public final class Analysis {
             }
             shares.put(p, perSpan);
         }
-        List<boolean[]> arrangements = Spans.arrangements(spans.size());
-        List<CombinationResult> results = new ArrayList<>();
-        for (int c = 0; c < combinations.size(); c++) {
-            Combination combination = combinations.get(c);
-            boolean patterned = job.pattern().stream().anyMatch(p -> combination.factors().getOrDefault(p, 0.0) != 0);
-            if (!patterned) {
-                continue;
-            }
-            Map<String, Double> fixed = new LinkedHashMap<>(combination.factors());
-            job.pattern().forEach(fixed::remove);
-            for (boolean[] loaded : arrangements) {
-                String arrangement = describe(spans, loaded);
-                String name = combination.name() + " (" + String.join(", ", job.pattern()) + " on " + arrangement + ")";
-                Superposition terms = new Superposition(fixed.size() + loaded.length).addCases(cases, fixed);
-                for (String p : job.pattern()) {
-                    double factor = combination.factors().getOrDefault(p, 0.0);
-                    for (int i = 0; i < loaded.length; i++) {
-                        if (loaded[i] && factor != 0) {
-                            terms.add(shares.get(p)[i], factor);
-                        }
-                    }
-                }
-                List<Integer> regions = new ArrayList<>();
-                for (int i = 0; i < loaded.length; i++) {
-                    if (loaded[i]) {
-                        regions.add(i);
-                    }
-                }
-                results.add(result(model, stresses, terms, name, combination.factors(), references.get(c), arrangement, regions));
-            }
-        }
-        return results;
-    }
-
-    static String describe(List<AnalysisResult.Span> spans, boolean[] loaded) {
-        List<String> numbered = new ArrayList<>();
-        List<String> other = new ArrayList<>();
-        for (int i = 0; i < loaded.length; i++) {
-            if (loaded[i]) {
-                String label = spans.get(i).label();
-                if (label.startsWith("span ")) {
-                    numbered.add(label.substring(5));
-                } else {
-                    other.add(label);
-                }
-            }
-        }
-        List<String> parts = new ArrayList<>();
-        if (!numbered.isEmpty()) {
-            parts.add((numbered.size() == 1 ? "span " : "spans ") + String.join(", ", numbered));
-        }
-        parts.addAll(other);
-        return String.join(", ", parts);
+        return new Patterns(job.pattern(), shares, spans, cases, model);
     }
 }

@@ -15,18 +15,17 @@ public final class Spans {
 
     static List<AnalysisResult.Span> of(Beam beam) {
         List<AnalysisResult.Span> spans = new ArrayList<>();
-        double tolerance = 1e-9 * beam.length();
-        List<Double> at = beam.supports().stream().map(s -> s.at()).toList();
-        if (at.get(0) > tolerance) {
-            spans.add(new AnalysisResult.Span("left overhang", 0, at.get(0)));
+        List<Double> borders = beam.regionBorders();
+        double first = beam.supports().get(0).at();
+        double last = beam.supports().get(beam.supports().size() - 1).at();
+        int numbered = 0;
+        for (int i = 0; i + 1 < borders.size(); i++) {
+            double from = borders.get(i);
+            double to = borders.get(i + 1);
+            String label = to <= first ? "left overhang" : from >= last ? "right overhang" : "span " + ++numbered;
+            spans.add(new AnalysisResult.Span(label, from, to));
         }
-        for (int i = 0; i + 1 < at.size(); i++) {
-            spans.add(new AnalysisResult.Span("span " + (i + 1), at.get(i), at.get(i + 1)));
-        }
-        if (beam.length() - at.get(at.size() - 1) > tolerance) {
-            spans.add(new AnalysisResult.Span("right overhang", at.get(at.size() - 1), beam.length()));
-        }
-        if (at.size() == 1) {
+        if (beam.supports().size() == 1) {
             // a single support: the whole beam cantilevers from it (to one side or both)
             spans.replaceAll(s -> new AnalysisResult.Span(s.label().replace("overhang", "cantilever"), s.from(), s.to()));
         }

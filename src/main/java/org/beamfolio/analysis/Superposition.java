@@ -47,6 +47,19 @@ final class Superposition {
         return Response.linear(name, terms, factors, count, model.supports().size(), model.elementStarts(), model.elementEnds());
     }
 
+    /** The vertical reactions, summed in term order as {@link #response} sums them, so they are the same to the bit. */
+    double[] reactionForces(int supports) {
+        double[] rf = new double[supports];
+        for (int t = 0; t < count; t++) {
+            double k = factors[t];
+            double[] r = terms[t].reactionForce();
+            for (int i = 0; i < supports; i++) {
+                rf[i] = rf[i] + k * r[i];
+            }
+        }
+        return rf;
+    }
+
     /** Which field of the terms a piece is summed from. */
     enum Quantity { SHEAR, MOMENT, DEFLECTION }
 

@@ -7,8 +7,9 @@ import java.util.Map;
 import org.beamfolio.analysis.AnalysisResult;
 import org.beamfolio.analysis.Extreme;
 import org.beamfolio.analysis.Field;
-import org.beamfolio.analysis.Response;
+import org.beamfolio.analysis.Patterns;
 import org.beamfolio.model.DeflectionLimit;
+import org.beamfolio.model.SupportKind;
 import org.beamfolio.results.CheckOutcome;
 import org.beamfolio.results.ReportUnits;
 
@@ -16,60 +17,112 @@ import org.beamfolio.results.ReportUnits;
  * Deflection under the sum of the named unfactored cases against the job's limits: a span ratio
  * L/n applied region by region (a span between supports uses its length; an overhang or
  * cantilever uses twice its length, common practice for limits written for spans), or an
- * absolute maximum over the whole beam. The limit values themselves (L/360, L/240) are the
- * engineer's, from the governing code (e.g. IBC 2021 Table 1604.3).
+ * absolute maximum over the whole beam. A pattern case among the named cases is also placed on
+ * every arrangement the envelope examines, and each region is checked under the arrangement that
+ * deflects it most (one span of two loaded deflects more than both: common practice). With
+ * spring supports the limit applies to the deflection relative to the supports' movement
+ * ({@link SupportChord}) unless the job says {@code relative: false}; the absolute deflection is
+ * stated beside it. The limit values themselves (L/360, L/240) are the engineer's, from the
+ * governing code (e.g. IBC 2021 Table 1604.3).
  */
 final class DeflectionCheck implements Check {
+    /** One loading the check examines: the named cases on every region, or one pattern arrangement. */
+    private record Loading(String name, Field deflection) {}
+
+    /** The worst deflection found and the loading that gives it. */
+    private record Worst(Extreme extreme, Loading loading) {}
+
     @Override
     public List<CheckOutcome> run(AnalysisResult result) {
         ReportUnits u = ReportUnits.of(result.job().report().units());
+        List<Double> supportsAt = result.job().beam().supports().stream().map(s -> s.at()).toList();
+        boolean springs = result.job().beam().supports().stream().anyMatch(s -> s.kind() instanceof SupportKind.Spring);
         List<CheckOutcome> out = new ArrayList<>();
         for (DeflectionLimit limit : result.job().deflectionLimits()) {
-            Map<String, Double> factors = new LinkedHashMap<>();
-            limit.cases().forEach(c -> factors.put(c, 1.0));
-            String name = String.join(" + ", limit.cases());
-            Response r = sum(result, factors, name);
-            Field deflection = r.deflection();
+            boolean relative = springs && limit.relative();
+            List<Loading> loadings = loadings(result, limit);
+            String measured = !springs ? "" : relative ? " relative to the supports' movement" : " (absolute, supports' movement included)";
             if (limit.spanRatio() != null) {
                 for (AnalysisResult.Span span : result.spans()) {
                     boolean overhang = !span.label().startsWith("span "); // an overhang or a cantilever
                     double effective = (overhang ? 2 : 1) * (span.to() - span.from());
                     double allowed = effective / limit.spanRatio();
-                    Extreme worst = largestIn(deflection, span.from(), span.to());
-                    double demand = Math.abs(worst.value());
+                    Worst worst = worstIn(loadings, List.of(span), relative, supportsAt);
+                    double demand = Math.abs(worst.extreme().value());
                     String label = span.label().replace("span ", "span").replace(" ", "-");
                     out.add(new CheckOutcome("deflection-" + String.join("+", limit.cases()) + "-" + label,
-                            "Deflection under " + name + " in " + span.label() + ", limit " + (overhang ? "2L" : "L") + "/"
-                                    + trim(limit.spanRatio()),
+                            "Deflection under " + worst.loading().name() + " in " + span.label() + measured + ", limit "
+                                    + (overhang ? "2L" : "L") + "/" + trim(limit.spanRatio())
+                                    + absoluteBeside(relative, worst, List.of(span), u),
                             u.deflection().fromSi(demand), u.deflection().fromSi(allowed), demand / allowed,
-                            demand <= allowed, name, worst.at(), u.deflection().symbol()));
+                            demand <= allowed, worst.loading().name(), worst.extreme().at(), u.deflection().symbol()));
                 }
             } else {
-                Extreme worst = deflection.maxAbs();
-                double demand = Math.abs(worst.value());
+                Worst worst = worstIn(loadings, result.spans(), relative, supportsAt);
+                double demand = Math.abs(worst.extreme().value());
                 out.add(new CheckOutcome("deflection-" + String.join("+", limit.cases()) + "-max",
-                        "Largest deflection under " + name + " against a maximum of " + trim(u.deflection().fromSi(limit.maximum()))
-                                + " " + u.deflection().symbol(),
+                        "Largest deflection under " + worst.loading().name() + measured + " against a maximum of "
+                                + trim(u.deflection().fromSi(limit.maximum())) + " " + u.deflection().symbol()
+                                + absoluteBeside(relative, worst, result.spans(), u),
                         u.deflection().fromSi(demand), u.deflection().fromSi(limit.maximum()), demand / limit.maximum(),
-                        demand <= limit.maximum(), name, worst.at(), u.deflection().symbol()));
+                        demand <= limit.maximum(), worst.loading().name(), worst.extreme().at(), u.deflection().symbol()));
             }
         }
         return out;
     }
 
-    private static Response sum(AnalysisResult result, Map<String, Double> factors, String name) {
-        Response total = null;
-        for (Map.Entry<String, Double> f : factors.entrySet()) {
-            Response r = result.cases().get(f.getKey()).times(f.getValue(), name);
-            total = total == null ? r : total.plus(r, name);
+    /** The named cases on every region, then (when a pattern case is among them) each arrangement of the envelope. */
+    private static List<Loading> loadings(AnalysisResult result, DeflectionLimit limit) {
+        Map<String, Double> factors = new LinkedHashMap<>();
+        limit.cases().forEach(c -> factors.put(c, 1.0));
+        String name = String.join(" + ", limit.cases());
+        Patterns patterns = result.patterns();
+        List<Loading> loadings = new ArrayList<>();
+        loadings.add(new Loading(name, patterns.response(factors, null, name).deflection()));
+        if (!patterns.casesIn(factors).isEmpty()) {
+            for (boolean[] loaded : patterns.arrangements()) {
+                String arrangement = patterns.name(name, factors, loaded);
+                loadings.add(new Loading(arrangement, patterns.response(factors, loaded, arrangement).deflection()));
+            }
         }
-        return total;
+        return loadings;
     }
 
-    private static Extreme largestIn(Field f, double from, double to) {
-        Extreme best = new Extreme(0, from, null);
+    /** The largest deflection in the regions over every loading; on a tie the earlier loading (all regions loaded) is kept. */
+    private static Worst worstIn(List<Loading> loadings, List<AnalysisResult.Span> regions, boolean relative, List<Double> supportsAt) {
+        Worst best = null;
+        for (Loading loading : loadings) {
+            for (AnalysisResult.Span region : regions) {
+                Field f = relative ? SupportChord.relative(loading.deflection(), region, supportsAt) : loading.deflection();
+                Extreme e = largestIn(f, region);
+                if (best == null || Math.abs(e.value()) > Math.abs(best.extreme().value())) {
+                    best = new Worst(e, loading);
+                }
+            }
+        }
+        return best;
+    }
+
+    /** With the relative deflection checked, the absolute one under the same loading, for the reader. */
+    private static String absoluteBeside(boolean relative, Worst worst, List<AnalysisResult.Span> regions, ReportUnits u) {
+        if (!relative) {
+            return "";
+        }
+        Extreme absolute = new Extreme(0, regions.get(0).from(), null);
+        for (AnalysisResult.Span region : regions) {
+            Extreme e = largestIn(worst.loading().deflection(), region);
+            if (Math.abs(e.value()) > Math.abs(absolute.value())) {
+                absolute = e;
+            }
+        }
+        return "; absolute deflection " + org.beamfolio.units.Numbers.format(u.deflection().fromSi(Math.abs(absolute.value())),
+                u.deflection().symbol()) + " at " + org.beamfolio.units.Numbers.format(u.length().fromSi(absolute.at()), u.length().symbol());
+    }
+
+    private static Extreme largestIn(Field f, AnalysisResult.Span region) {
+        Extreme best = new Extreme(0, region.from(), null);
         for (int i = 0; i < f.size(); i++) {
-            if (f.start(i) >= from - 1e-12 && f.end(i) <= to + 1e-12) {
+            if (SupportChord.inside(f.start(i), f.end(i), region)) {
                 for (int sign : new int[] {1, -1}) {
                     Extreme e = f.extremeOf(i, sign);
                     if (Math.abs(e.value()) > Math.abs(best.value())) {

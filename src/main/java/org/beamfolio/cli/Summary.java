@@ -2,7 +2,7 @@ package org.beamfolio.cli;
 
 import java.util.List;
 import org.beamfolio.analysis.AnalysisResult;
-import org.beamfolio.analysis.CombinationResult;
+import org.beamfolio.analysis.ReactionEnvelope;
 import org.beamfolio.analysis.Extreme;
 import org.beamfolio.analysis.Extremes;
 import org.beamfolio.model.Support;
@@ -24,23 +24,16 @@ final class Summary {
         out.append(String.join(", ", spans)).append('\n');
         out.append("  ").append(r.combinations().size()).append(" combinations from ").append(r.combinationSource()).append('\n');
         List<Support> supports = r.job().beam().supports();
-        List<CombinationResult> plain = r.combinations().stream().filter(c -> c.arrangement().isEmpty()).toList();
-        out.append("  reactions (").append(u.force().symbol()).append(", up +) per combination:\n");
-        StringBuilder header = new StringBuilder(String.format("    %-34s", "combination"));
-        for (Support s : supports) {
-            header.append(String.format(" %12s", s.kind().label() + "@" + Numbers.format(u.length().fromSi(s.at()))));
-        }
-        out.append(header).append('\n');
-        for (int k = 0; k < Math.min(8, plain.size()); k++) {
-            CombinationResult c = plain.get(k);
-            StringBuilder line = new StringBuilder(String.format("    %-34s", c.name().length() > 34 ? c.name().substring(0, 33) + "…" : c.name()));
-            for (int i = 0; i < supports.size() && i < 6; i++) {
-                line.append(String.format(" %12s", Numbers.format(u.force().fromSi(c.response().reactionForce()[i]))));
-            }
-            out.append(line).append('\n');
-        }
-        if (plain.size() > 8) {
-            out.append("    (").append(plain.size() - 8).append(" more combinations in the results file)\n");
+        List<ReactionEnvelope.AtSupport> reactions = r.reactions().supports();
+        out.append("  governing reactions (").append(u.force().symbol())
+                .append(", up +), largest and smallest over every combination and arrangement:\n");
+        for (int i = 0; i < reactions.size(); i++) {
+            Support s = supports.get(i);
+            ReactionEnvelope.AtSupport a = reactions.get(i);
+            out.append(String.format("    R%-3d %-7s at %-10s max %12s (%s)%n", i + 1, s.kind().label(), len(s.at(), u),
+                    Numbers.format(u.force().fromSi(a.max().force())), a.max().combination()));
+            out.append(String.format("    %-26s min %12s (%s)%s%n", "", Numbers.format(u.force().fromSi(a.min().force())),
+                    a.min().combination(), a.uplift() ? "  UPLIFT" : ""));
         }
         Extremes e = r.envelope();
         if (e != null) {

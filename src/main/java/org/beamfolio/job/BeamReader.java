@@ -203,8 +203,7 @@ final class BeamReader {
             }
             if (supports != null) {
                 for (Support s : supports) {
-                    boolean restrainsRotation = s.kind() instanceof SupportKind.Fixed
-                            || (s.kind() instanceof SupportKind.Spring sp && sp.kr() > 0);
+                    boolean restrainsRotation = s.kind().restrainsRotation();
                     if (restrainsRotation && Math.abs(s.at() - at) <= SAME_POINT * length) {
                         c.error(item, path, "a hinge cannot stand at a support that restrains rotation ("
                                 + s.kind().label() + " at " + c.length(s.at()) + "): say which side the support holds by moving one of them");

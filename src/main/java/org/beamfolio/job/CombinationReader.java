@@ -174,9 +174,10 @@ final class CombinationReader {
                 result.add(id);
             }
         }
-        if (!items.isEmpty() && beam != null && beam.supports().size() < 3) {
-            c.error(node, "pattern", "pattern loading needs a beam of two or more spans between supports; this beam has "
-                    + Math.max(0, beam.supports().size() - 1) + " (remove \"pattern\")");
+        int regions = beam == null ? 0 : beam.regionBorders().size() - 1;
+        if (!items.isEmpty() && beam != null && regions < 2) {
+            c.error(node, "pattern", "pattern loading needs two or more regions (spans between supports, or overhangs);"
+                    + " this beam has one (remove \"pattern\")");
         }
         return result;
     }
@@ -220,10 +221,12 @@ final class CombinationReader {
         } else {
             max = c.positive(maxNode, f.path("max"), Dimension.LENGTH);
         }
+        YamlNode relativeNode = f.optional("relative");
+        Boolean relative = relativeNode == null ? Boolean.TRUE : c.bool(relativeNode, f.path("relative"));
         f.rejectUnknown();
-        if (named.isEmpty() || (ratio == null && max == null)) {
+        if (named.isEmpty() || (ratio == null && max == null) || relative == null) {
             return null;
         }
-        return new DeflectionLimit(named, ratio, max);
+        return new DeflectionLimit(named, ratio, max, relative);
     }
 }

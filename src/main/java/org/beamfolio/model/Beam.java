@@ -14,6 +14,26 @@ public record Beam(double length, String section, String material, List<Support>
         segments = List.copyOf(segments);
     }
 
+    /**
+     * The borders of the beam's regions for pattern loading, left to right: each span between two
+     * supports is a region, and so is an overhang beyond the first or last support (its free end
+     * is then a border). A beam on one support has only overhangs (cantilevers).
+     */
+    public List<Double> regionBorders() {
+        double tolerance = 1e-9 * length;
+        List<Double> borders = new java.util.ArrayList<>();
+        double first = supports.get(0).at();
+        double last = supports.get(supports.size() - 1).at();
+        if (first > tolerance) {
+            borders.add(0.0);
+        }
+        supports.forEach(s -> borders.add(s.at()));
+        if (length - last > tolerance) {
+            borders.add(length);
+        }
+        return borders;
+    }
+
     /** The section at x, strictly inside a stretch without change (the last segment naming x wins). */
     public String sectionAt(double x) {
         String id = section;

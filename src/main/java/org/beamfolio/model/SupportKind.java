@@ -9,6 +9,11 @@ public sealed interface SupportKind {
         return false;
     }
 
+    /** Whether the support restrains rotation, and so carries a support moment (fixed, or a spring with kr). */
+    default boolean restrainsRotation() {
+        return this instanceof Fixed || (this instanceof Spring s && s.kr() > 0);
+    }
+
     record Pin() implements SupportKind {
         public String label() {
             return "pin";

@@ -11,6 +11,8 @@ import org.beamfolio.analysis.AnalysisResult;
 import org.beamfolio.analysis.CombinationResult;
 import org.beamfolio.analysis.Extreme;
 import org.beamfolio.analysis.Extremes;
+import org.beamfolio.analysis.ReactionEnvelope;
+import org.beamfolio.analysis.Response;
 import org.beamfolio.model.Support;
 import org.beamfolio.section.SectionProperties;
 import org.beamfolio.units.Unit;
@@ -100,6 +102,7 @@ public final class ResultsWriter {
             g.writeStartObject();
             g.writeEndObject();
         }
+        reactions(g, result, u);
         g.writeArrayFieldStart("checks");
         for (CheckOutcome check : checks) {
             g.writeStartObject();
@@ -115,6 +118,54 @@ public final class ResultsWriter {
             g.writeEndObject();
         }
         g.writeEndArray();
+        g.writeEndObject();
+    }
+
+    /**
+     * Per support: the unfactored reaction of each load case (and its moment where the support
+     * restrains rotation), for the designer of the supporting structure; and the largest and
+     * smallest reaction over every combination and pattern arrangement, with the one that gives it.
+     */
+    private static void reactions(JsonGenerator g, AnalysisResult result, ReportUnits u) throws IOException {
+        List<Support> supports = result.job().beam().supports();
+        g.writeArrayFieldStart("reactions_by_case");
+        for (int i = 0; i < supports.size(); i++) {
+            Support s = supports.get(i);
+            g.writeStartObject();
+            g.writeNumberField("at", u.length().fromSi(s.at()));
+            g.writeStringField("type", s.kind().label());
+            g.writeObjectFieldStart("cases");
+            for (Map.Entry<String, Response> c : result.cases().entrySet()) {
+                g.writeNumberField(c.getKey(), u.force().fromSi(c.getValue().reactionForce()[i]));
+            }
+            g.writeEndObject();
+            if (s.kind().restrainsRotation()) {
+                g.writeObjectFieldStart("moments");
+                for (Map.Entry<String, Response> c : result.cases().entrySet()) {
+                    g.writeNumberField(c.getKey(), u.moment().fromSi(c.getValue().reactionMoment()[i]));
+                }
+                g.writeEndObject();
+            }
+            g.writeEndObject();
+        }
+        g.writeEndArray();
+        g.writeArrayFieldStart("reactions_extreme");
+        List<ReactionEnvelope.AtSupport> extremes = result.reactions().supports();
+        for (int i = 0; i < extremes.size(); i++) {
+            g.writeStartObject();
+            g.writeNumberField("at", u.length().fromSi(supports.get(i).at()));
+            g.writeStringField("type", supports.get(i).kind().label());
+            bound(g, "max", extremes.get(i).max(), u);
+            bound(g, "min", extremes.get(i).min(), u);
+            g.writeEndObject();
+        }
+        g.writeEndArray();
+    }
+
+    private static void bound(JsonGenerator g, String key, ReactionEnvelope.Bound b, ReportUnits u) throws IOException {
+        g.writeObjectFieldStart(key);
+        g.writeNumberField("force", u.force().fromSi(b.force()));
+        g.writeStringField("combination", b.combination());
         g.writeEndObject();
     }
 
