@@ -14,8 +14,9 @@ public final class ReactionEnvelope {
 
     /** The extremes at one support. */
     public record AtSupport(Bound max, Bound min) {
+        /** The smallest reaction pulls the beam down by more than round-off of the largest. */
         public boolean uplift() {
-            return min.force() < 0;
+            return min.force() < -1e-9 * Math.abs(max.force());
         }
     }
 

@@ -8,7 +8,7 @@ import java.util.List;
  * {@link ReportModelBuilder}; read by the templates in report-templates/ as {@code r}.
  */
 public record ReportModel(Sheet sheet, Cover cover, Revision revision, Basis basis, Loading loading, List<CombinationSheet> analyses,
-                          Envelope envelope, Stresses stresses, Checks checks, List<String> cautions,
+                          Envelope envelope, Reactions reactions, Stresses stresses, Checks checks, List<String> cautions,
                           List<String> reviewChecklist, List<List<String>> history, Appendix appendix) {
 
     /** The title block on every sheet. */
@@ -42,6 +42,12 @@ public record ReportModel(Sheet sheet, Cover cover, Revision revision, Basis bas
     /** A derivation step as printed: its number, what it finds, the working and the steps it draws on. */
     public record NumberedStep(String number, String statement, String symbolic, String substituted, String result,
                                String source, String uses) {}
+
+    /**
+     * Reactions for the supporting structure: unfactored per load case (moments only where a support
+     * restrains rotation, else null), their extremes over every combination and arrangement, and uplift.
+     */
+    public record Reactions(Table byCase, Table momentsByCase, Table extremes, int combinations, List<String> uplift) {}
 
     public record Envelope(Table extremes, List<Figure> figures, int arrangements, Table equilibrium) {}
 

@@ -58,7 +58,7 @@ final class ReportModelBuilder {
         ReportModel.Revision revision = previous == null ? null
                 : new RevisionPart(result, checks, previous, previousChecks, t).build();
         ReportModel model = new ReportModel(sheet, cover(checks, analyses, revision != null), revision, basis(), loading.build(), analyses, envelope,
-                stresses, checks(checks), cautions(), reviewChecklist(), history(), appendix());
+                new ReactionsPart(result, t).build(), stresses, checks(checks), cautions(), reviewChecklist(), history(), appendix());
         return new Built(model, drawings);
     }
 
@@ -111,6 +111,7 @@ final class ReportModelBuilder {
             contents.add(new ReportModel.Row("Analysis: " + s.name(), s.anchor()));
         }
         contents.add(new ReportModel.Row("Envelope over all combinations", "envelope"));
+        contents.add(new ReportModel.Row("Reactions for the supporting structure", "reactions"));
         contents.add(new ReportModel.Row("Section properties and stresses", "stresses"));
         contents.add(new ReportModel.Row("Checks and summary", "checks"));
         contents.add(new ReportModel.Row("Cautions", "cautions"));
@@ -210,11 +211,13 @@ final class ReportModelBuilder {
     }
 
     private List<String> cautions() {
-        return List.of(
+        List<String> cautions = new ArrayList<>(new ReactionsPart(result, t).uplift());
+        cautions.addAll(List.of(
                 "This package is valid only when it has been reviewed, signed and sealed by a licensed professional engineer who takes responsibility for the design. The software does not replace the engineer's judgement.",
                 "Loads, load combinations, support conditions, section dimensions and material values are the engineer's inputs: verify them against the governing building code, the referenced standards and the requirements of the authority having jurisdiction.",
                 "The method's limits: linear elastic, small deflections, Euler-Bernoulli beams without shear deformation, point supports. Lateral-torsional buckling, local buckling, connections, bearing, web crippling, vibration, fire, fatigue, creep and second-order effects are not checked unless shown in this package.",
-                "Allowable stresses are those given in the job file; they must already include whatever reductions the governing standard requires.");
+                "Allowable stresses are those given in the job file; they must already include whatever reductions the governing standard requires."));
+        return cautions;
     }
 
     private List<String> reviewChecklist() {
