@@ -89,6 +89,23 @@ class ReactionEnvelopeTest {
         assertFalse(r.get(1).uplift());
     }
 
+    @Test
+    void twoCantileversFromOneSupportAreAPattern() {
+        // Fixed support at the middle of a 6 m beam, L = 10 kN/m: both cantilevers loaded, R = w * 6 m = 60 kN;
+        // one side loaded, R = w * 3 m = 30 kN (statics).
+        String text = TestJobs.text("6 m", "    - { at: 3 m, type: fixed }\n", "  - { case: L, type: uniform, w: 10 kN/m }\n")
+                + "combinations:\n  - { name: L, factors: { L: 1.0 } }\npattern: [ L ]\n";
+        AnalysisResult result = TestJobs.solve(text);
+        assertEquals(List.of("left cantilever", "right cantilever"), result.spans().stream().map(AnalysisResult.Span::label).toList());
+        ReactionEnvelope.AtSupport r = result.reactions().supports().get(0);
+        near(60e3, r.max().force());
+        assertEquals("L", r.max().combination());
+        near(30e3, r.min().force());
+        assertEquals("L (L on left cantilever)", r.min().combination());
+        // the hogging moment at the support of one loaded cantilever, w a^2 / 2 = 45 kN*m (statics)
+        near(-45e3, result.envelope().momentMin().value());
+    }
+
     private static void near(double expected, double actual) {
         assertEquals(expected, actual, 1e-9 * Math.abs(expected));
     }
