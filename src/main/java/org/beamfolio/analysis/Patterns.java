@@ -65,9 +65,9 @@ public final class Patterns {
         return terms;
     }
 
-    /** The whole response of {@link #terms}, its diagrams summed. */
-    public Response response(Map<String, Double> factors, boolean[] loaded, String name) {
-        return terms(factors, loaded).response(model, name);
+    /** The deflection of {@link #terms} alone, the same numbers as the whole response's. */
+    public Field deflection(Map<String, Double> factors, boolean[] loaded) {
+        return terms(factors, loaded).deflection(model);
     }
 
     /** An arrangement's name: {@code D + L (L on span 2)}; the base name alone when every region is loaded. */

@@ -60,6 +60,18 @@ final class Superposition {
         return rf;
     }
 
+    /** The deflection alone, summed in term order as {@link #response} sums it: a deflection check needs no other field. */
+    Field deflection(StructureModel model) {
+        if (count == 0) {
+            return Field.zero(model.elementStarts(), model.elementEnds());
+        }
+        Field[] d = new Field[count];
+        for (int t = 0; t < count; t++) {
+            d[t] = terms[t].deflection();
+        }
+        return Field.linear(d, factors, count);
+    }
+
     /** Which field of the terms a piece is summed from. */
     enum Quantity { SHEAR, MOMENT, DEFLECTION }
 

@@ -78,11 +78,11 @@ final class DeflectionCheck implements Check {
         String name = String.join(" + ", limit.cases());
         Patterns patterns = result.patterns();
         List<Loading> loadings = new ArrayList<>();
-        loadings.add(new Loading(name, patterns.response(factors, null, name).deflection()));
+        loadings.add(new Loading(name, patterns.deflection(factors, null)));
         if (!patterns.casesIn(factors).isEmpty()) {
             for (boolean[] loaded : patterns.arrangements()) {
                 String arrangement = patterns.name(name, factors, loaded);
-                loadings.add(new Loading(arrangement, patterns.response(factors, loaded, arrangement).deflection()));
+                loadings.add(new Loading(arrangement, patterns.deflection(factors, loaded)));
             }
         }
         return loadings;

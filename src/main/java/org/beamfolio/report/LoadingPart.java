@@ -55,7 +55,8 @@ final class LoadingPart {
             long arrangements = result.combinations().stream().filter(c -> !c.arrangement().isEmpty()).count();
             pattern.add("Pattern loading: case " + String.join(", ", job.pattern()) + " is also applied region by region ("
                     + String.join("; ", result.spans().stream().map(s -> s.label() + " " + t.len(s.from()) + " to " + t.len(s.to())).toList())
-                    + "), giving " + arrangements + " further arrangements, all included in the envelope.");
+                    + "), giving " + arrangements + " further arrangements, all included in the envelope and the reactions;"
+                    + " a deflection check naming a pattern case is made under each arrangement as well.");
         }
         return new ReportModel.Loading(beamRows(), supports(), figures, loads(), result.combinationSource(),
                 new ReportModel.Table(List.of("Combination", "Factors", "Source"), combos), result.droppedCombinations(), pattern);

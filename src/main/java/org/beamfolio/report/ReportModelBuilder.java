@@ -125,11 +125,14 @@ final class ReportModelBuilder {
         Job job = result.job();
         List<String> codes = new ArrayList<>();
         codes.add("Load combinations: " + result.combinationSource() + ".");
+        boolean springs = job.beam().supports().stream().anyMatch(s -> s.kind() instanceof org.beamfolio.model.SupportKind.Spring);
         for (DeflectionLimit d : job.deflectionLimits()) {
             String cases = String.join(" + ", d.cases());
             codes.add("Deflection under " + cases + ": " + (d.spanRatio() != null
                     ? "span/" + Numbers.format(d.spanRatio()) + " (twice the length for an overhang or cantilever)"
-                    : "at most " + t.deflection(d.maximum())) + ", as set by the engineer from the governing code.");
+                    : "at most " + t.deflection(d.maximum())) + ", as set by the engineer from the governing code"
+                    + (springs ? (d.relative() ? "; measured from the line between the supports' movements (the springs' settlement taken out)"
+                    : "; absolute deflection, the springs' settlement included") : "") + ".");
         }
         for (Material m : job.materials().values()) {
             if (!m.source().isBlank()) {
