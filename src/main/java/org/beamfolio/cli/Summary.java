@@ -27,13 +27,18 @@ final class Summary {
         List<ReactionEnvelope.AtSupport> reactions = r.reactions().supports();
         out.append("  governing reactions (").append(u.force().symbol())
                 .append(", up +), largest and smallest over every combination and arrangement:\n");
-        for (int i = 0; i < reactions.size(); i++) {
+        for (int i = 0; i < Math.min(8, reactions.size()); i++) {
             Support s = supports.get(i);
             ReactionEnvelope.AtSupport a = reactions.get(i);
             out.append(String.format("    R%-3d %-7s at %-10s max %12s (%s)%n", i + 1, s.kind().label(), len(s.at(), u),
                     Numbers.format(u.force().fromSi(a.max().force())), a.max().combination()));
             out.append(String.format("    %-26s min %12s (%s)%s%n", "", Numbers.format(u.force().fromSi(a.min().force())),
                     a.min().combination(), a.uplift() ? "  UPLIFT" : ""));
+        }
+        if (reactions.size() > 8) {
+            long uplift = reactions.stream().skip(8).filter(ReactionEnvelope.AtSupport::uplift).count();
+            out.append("    (").append(reactions.size() - 8).append(" more supports in the results file")
+                    .append(uplift > 0 ? ", " + uplift + " of them with UPLIFT" : "").append(")\n");
         }
         Extremes e = r.envelope();
         if (e != null) {
