@@ -83,7 +83,7 @@ public final class Analysis {
         }
         Extremes envelope = Envelope.of(results);
         return new AnalysisResult(job, model, List.copyOf(loads), sections, cases, results, envelope, dropped, source, spans,
-                patterns, reactions);
+                patterns, reactions, GoverningStresses.of(job, model, results));
     }
 
     private static Response solve(StructureModel model, List<Load> loads, String name, Job job) throws UnstableBeamException {

@@ -5,6 +5,7 @@ import org.beamfolio.analysis.AnalysisResult;
 import org.beamfolio.analysis.ReactionEnvelope;
 import org.beamfolio.analysis.Extreme;
 import org.beamfolio.analysis.Extremes;
+import org.beamfolio.analysis.StressDemand;
 import org.beamfolio.model.Support;
 import org.beamfolio.units.Numbers;
 import org.beamfolio.results.CheckOutcome;
@@ -47,10 +48,13 @@ final class Summary {
             line(out, "shear, largest +", e.shearMax(), u.force(), u);
             line(out, "shear, largest -", e.shearMin(), u.force(), u);
             line(out, "deflection, down", e.deflectionMax(), u.deflection(), u);
-            line(out, "stress, tension", Math.abs(e.stressTopMax().value()) > Math.abs(e.stressBottomMax().value())
-                    ? e.stressTopMax() : e.stressBottomMax(), u.stress(), u);
-            line(out, "stress, compression", e.stressTopMin().value() < e.stressBottomMin().value()
-                    ? e.stressTopMin() : e.stressBottomMin(), u.stress(), u);
+        }
+        // the governing stresses the checks and the worked steps read
+        for (StressDemand d : java.util.Arrays.asList(r.stresses().tension(), r.stresses().compression(), r.stresses().shear())) {
+            if (d != null) {
+                line(out, "stress, " + d.kind().name().toLowerCase(java.util.Locale.ROOT),
+                        new Extreme(d.stress(), d.at(), d.combination().name()), u.stress(), u);
+            }
         }
         for (CheckOutcome c : checks) {
             out.append(String.format("  %-4s %-40s ratio %-8s %s%n", c.pass() ? "ok" : "FAIL", c.id(), Numbers.format(c.ratio()),

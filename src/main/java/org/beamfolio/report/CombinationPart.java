@@ -200,14 +200,16 @@ final class CombinationPart {
         for (double x : xs) {
             String vl = x == 0 ? "-" : t.force(clean(v.leftOf(x), vScale));
             String vr = x == length ? "-" : t.force(clean(v.at(x), vScale));
-            double m = x == length ? r.moment().leftOf(x) : r.moment().at(x);
-            rows.add(List.of(t.len(x), vl, vr, t.moment(clean(m, mScale)),
+            // both sides of a jump: a couple makes the moment jump as a point load makes the shear jump
+            String ml = x == 0 ? "-" : t.moment(clean(r.moment().leftOf(x), mScale));
+            String mr = x == length ? "-" : t.moment(clean(r.moment().at(x), mScale));
+            rows.add(List.of(t.len(x), vl, vr, ml, mr,
                     t.deflection(clean(r.deflection().at(x), dScale)), zeroShear.contains(x) ? "zero shear" : ""));
         }
         if (rows.size() > 40) {
             rows = rows.subList(0, 40);
         }
-        return new ReportModel.Table(List.of("x", "V left", "V right", "M", "Deflection", "Note"), rows);
+        return new ReportModel.Table(List.of("x", "V left", "V right", "M left", "M right", "Deflection", "Note"), rows);
     }
 
     private static double scale(Field f) {
