@@ -6,7 +6,7 @@ package org.beamfolio.analysis;
  * stiffness matrix, numbered left to right, has a half-bandwidth of three or four, so the solve is
  * linear in the number of nodes.
  */
-final class BandedSolver {
+final class BandedSolver implements CaseSolver.Assembly {
     private final int n;
     private final int bandwidth;
     /** band[i][k] holds K[i][i + k]; after {@link #solve} it holds the Cholesky factor. */
@@ -26,7 +26,8 @@ final class BandedSolver {
         return n;
     }
 
-    void add(int i, int j, double value) {
+    @Override
+    public void add(int i, int j, double value) {
         int r = Math.min(i, j);
         int k = Math.abs(i - j);
         if (k > bandwidth) {
@@ -41,7 +42,8 @@ final class BandedSolver {
     }
 
     /** Replaces row and column i by a diagonal entry alone, so that d[i] = 0: a restrained displacement. */
-    void restrain(int i) {
+    @Override
+    public void restrain(int i) {
         restrained[i] = true;
         for (int k = 0; k <= bandwidth; k++) {
             if (i + k < n) {

@@ -47,9 +47,28 @@ public final class CaseSolver {
     }
 
     static Response solve(StructureModel m, ElementLoads loads, String name) throws BandedSolver.NotPositiveDefinite {
-        int elements = m.elements();
         BandedSolver k = new BandedSolver(m.unknowns, 4);
         double[] f = new double[m.unknowns];
+        double[][] feq = assemble(m, loads, k, f);
+        double[] ratio = new double[1];
+        double[] d = k.solve(f, ratio);
+        return fields(m, loads, feq, d, k.lowPart(), name, ratio[0]);
+    }
+
+    /** Where the assembly puts the stiffness: the banded solver, or a dense matrix to be written out. */
+    interface Assembly {
+        void add(int i, int j, double value);
+
+        void restrain(int i);
+    }
+
+    /**
+     * Assembles K (the upper triangle, into {@code k}) and f: element stiffnesses, work-equivalent
+     * nodal loads, nodal forces and couples, springs, and the rigid supports' restraints. Returns
+     * each element's equivalent nodal loads.
+     */
+    private static double[][] assemble(StructureModel m, ElementLoads loads, Assembly k, double[] f) {
+        int elements = m.elements();
         double[][] feq = new double[elements][];
         for (int e = 0; e < elements; e++) {
             int[] dofs = dofs(m, e);
@@ -82,9 +101,78 @@ public final class CaseSolver {
                 }
             }
         }
-        double[] ratio = new double[1];
-        double[] d = k.solve(f, ratio);
-        return fields(m, loads, feq, d, k.lowPart(), name, ratio[0]);
+        return feq;
+    }
+
+    /**
+     * The system K d = f of the free unknowns (SI: N, m, rad), as a dense matrix to write out for a
+     * small model, with each unknown's node (0-based), whether it is a rotation, and for a
+     * rotation at a hinge which side.
+     */
+    public record LinearSystem(double[][] k, double[] f, int[] node, boolean[] rotation, String[] side) {
+        public int size() {
+            return f.length;
+        }
+    }
+
+    public static LinearSystem system(StructureModel m, ElementLoads loads) {
+        int n = m.unknowns;
+        double[][] dense = new double[n][n];
+        boolean[] restrained = new boolean[n];
+        double[] f = new double[n];
+        assemble(m, loads, new Assembly() {
+            @Override
+            public void add(int i, int j, double value) {
+                dense[i][j] += value;
+                if (i != j) {
+                    dense[j][i] += value;
+                }
+            }
+
+            @Override
+            public void restrain(int i) {
+                restrained[i] = true;
+            }
+        }, f);
+        int[] node = new int[n];
+        boolean[] rotation = new boolean[n];
+        String[] side = new String[n];
+        for (int i = 0; i < m.x.length; i++) {
+            node[m.v[i]] = i;
+            node[m.thetaLeft[i]] = i;
+            node[m.thetaRight[i]] = i;
+            rotation[m.thetaLeft[i]] = true;
+            rotation[m.thetaRight[i]] = true;
+            boolean hinge = m.thetaLeft[i] != m.thetaRight[i];
+            side[m.v[i]] = "";
+            side[m.thetaLeft[i]] = hinge ? "left" : "";
+            side[m.thetaRight[i]] = hinge ? "right" : "";
+        }
+        int free = 0;
+        for (boolean r : restrained) {
+            free += r ? 0 : 1;
+        }
+        double[][] kf = new double[free][free];
+        double[] ff = new double[free];
+        int[] nf = new int[free];
+        boolean[] rf = new boolean[free];
+        String[] sf = new String[free];
+        for (int i = 0, a = 0; i < n; i++) {
+            if (restrained[i]) {
+                continue;
+            }
+            for (int j = 0, b = 0; j < n; j++) {
+                if (!restrained[j]) {
+                    kf[a][b++] = dense[i][j];
+                }
+            }
+            ff[a] = f[i];
+            nf[a] = node[i];
+            rf[a] = rotation[i];
+            sf[a] = side[i];
+            a++;
+        }
+        return new LinearSystem(kf, ff, nf, rf, sf);
     }
 
     private static Response fields(StructureModel m, ElementLoads loads, double[][] feq, double[] d, double[] dLow, String name,

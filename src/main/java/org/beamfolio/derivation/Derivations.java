@@ -47,33 +47,6 @@ public final class Derivations {
         return Method.STIFFNESS;
     }
 
-    /** Deflection at each region's middle and its largest in the region, from the exact elastic curve. */
-    private static void deflections(AnalysisResult result, CombinationResult c, Notation n, Steps steps) {
-        var d = c.response().deflection();
-        String unit = Notation.sym(n.deflection);
-        for (AnalysisResult.Span span : result.spans()) {
-            double mid = 0.5 * (span.from() + span.to());
-            steps.add("Deflection at the middle of " + span.label() + " (x = " + Steps.n(n.x(mid), n.xu()) + ")",
-                    "EI v'' = M, integrated exactly element by element with the support and continuity conditions",
-                    "δ = " + Steps.n(n.deflection.fromSi(d.at(mid)), unit), n.deflection.fromSi(d.at(mid)), unit,
-                    "exact integration of the elastic curve");
-            org.beamfolio.analysis.Extreme worst = new org.beamfolio.analysis.Extreme(0, span.from(), null);
-            for (int i = 0; i < d.size(); i++) {
-                if (d.start(i) >= span.from() - 1e-12 && d.end(i) <= span.to() + 1e-12) {
-                    for (int sign : new int[] {1, -1}) {
-                        var e = d.extremeOf(i, sign);
-                        if (Math.abs(e.value()) > Math.abs(worst.value())) {
-                            worst = e;
-                        }
-                    }
-                }
-            }
-            steps.add("Largest deflection in " + span.label() + ", where the slope is zero (a root of the slope polynomial)",
-                    "v'(x) = 0", "δ_max = " + Steps.n(n.deflection.fromSi(worst.value()), unit) + " at x = " + Steps.n(n.x(worst.at()), n.xu()),
-                    n.deflection.fromSi(worst.value()), unit, "exact integration of the elastic curve");
-        }
-    }
-
     public static Derivation of(AnalysisResult result, CombinationResult combination) {
         List<Load> loads = FactoredLoads.of(result, combination);
         Notation n = new Notation(result);
@@ -93,7 +66,7 @@ public final class Derivations {
         };
         AreaMethod area = new AreaMethod(result, combination, loads, n, steps);
         area.zeroShearSteps();
-        deflections(result, combination, n, steps);
+        new DeflectionSteps(result, combination, loads, n, steps).write();
         tables.add(new Derivation.Table("Shear and moment by the area method between key points", area.header(), area.rows()));
         return new Derivation(combination.name(), title, steps.list(), tables);
     }

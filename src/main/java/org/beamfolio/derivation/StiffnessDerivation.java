@@ -17,6 +17,8 @@ import org.beamfolio.model.Support;
  */
 final class StiffnessDerivation {
     private static final int ROWS = 40;
+    /** Up to this many free unknowns, K and f are written out in full. */
+    static final int WRITTEN_OUT = 8;
 
     private final AnalysisResult result;
     private final CombinationResult combination;
@@ -40,6 +42,13 @@ final class StiffnessDerivation {
                 + "work-equivalent nodal loads; springs add their stiffness to the diagonal; rigid supports remove their unknowns. "
                 + "The numbers below come from the matrix solution K d = f, not from a hand method, and the equilibrium check "
                 + "that follows verifies them independently.", "direct stiffness method (matrix structural analysis)");
+        CaseSolver.LinearSystem system = CaseSolver.system(m, CaseSolver.loadsOf(m, loads));
+        steps.note(system.size() <= WRITTEN_OUT
+                ? "After the supports remove their unknowns, K is " + system.size() + " × " + system.size() + ": K, f and the solved d are "
+                        + "written out in the table \"" + SYSTEM_TITLE + "\" below; multiplying each row of K by d gives that row's f."
+                : "After the supports remove their unknowns, K is " + system.size() + " × " + system.size() + " (banded): too large to write "
+                        + "out, it is solved numerically by Cholesky factorisation with iterative refinement; the solved displacements "
+                        + "are tabled below.", "direct stiffness method (matrix structural analysis)");
         Response r = combination.response();
         List<Support> supports = result.job().beam().supports();
         for (int i = 0; i < supports.size(); i++) {
@@ -57,9 +66,59 @@ final class StiffnessDerivation {
         return "Direct stiffness method (matrix solution)";
     }
 
-    /** The equivalent nodal loads of each element and the solved displacements at each node. */
+    private static final String SYSTEM_TITLE = "Stiffness equations K d = f of the free unknowns";
+
+    /**
+     * K, d and f of the free unknowns in the report's force and length units: rows and columns
+     * for a deflection v (up positive) and a rotation θ (counter-clockwise positive, rad); K of
+     * two deflections in force per length, of a deflection and a rotation in force, of two
+     * rotations in force times length; f in force (v rows) and moment (θ rows).
+     */
+    private Derivation.Table systemTable(StructureModel m) {
+        CaseSolver.LinearSystem system = CaseSolver.system(m, CaseSolver.loadsOf(m, loads));
+        double perForce = n.force.fromSi(1);
+        double perLength = n.length.fromSi(1);
+        Response r = combination.response();
+        double[] x = m.nodePositions();
+        List<String> header = new java.util.ArrayList<>();
+        header.add("Unknown");
+        for (int j = 0; j < system.size(); j++) {
+            header.add(label(system, j));
+        }
+        header.add("d (" + n.xu() + ", rad)");
+        header.add("f (" + n.fu() + ", " + n.mu() + ")");
+        List<List<String>> rows = new java.util.ArrayList<>();
+        for (int i = 0; i < system.size(); i++) {
+            List<String> row = new java.util.ArrayList<>();
+            row.add(label(system, i));
+            for (int j = 0; j < system.size(); j++) {
+                int rotations = (system.rotation()[i] ? 1 : 0) + (system.rotation()[j] ? 1 : 0);
+                row.add(fmt(system.k()[i][j] * perForce * Math.pow(perLength, rotations - 1)));
+            }
+            double at = x[system.node()[i]];
+            double d = system.rotation()[i]
+                    ? ("left".equals(system.side()[i]) || system.node()[i] == x.length - 1 ? r.slope().leftOf(at) : r.slope().at(at))
+                    : -r.deflection().at(at) * perLength;
+            row.add(fmt(d));
+            row.add(fmt(system.f()[i] * perForce * (system.rotation()[i] ? perLength : 1)));
+            rows.add(row);
+        }
+        return new Derivation.Table(SYSTEM_TITLE + " (v up +, θ counter-clockwise +; K in " + n.fu() + "/" + n.xu() + ", " + n.fu()
+                + " and " + n.mu() + ")", header, rows);
+    }
+
+    private static String label(CaseSolver.LinearSystem system, int i) {
+        String side = system.side()[i].isEmpty() ? "" : (system.side()[i].equals("left") ? "L" : "R");
+        return (system.rotation()[i] ? "θ" : "v") + (system.node()[i] + 1) + side;
+    }
+
+    /** K d = f written out for a small model, the equivalent nodal loads of each element and the solved displacements at each node. */
     List<Derivation.Table> tables() {
         StructureModel m = result.model();
+        List<Derivation.Table> out = new java.util.ArrayList<>();
+        if (CaseSolver.system(m, CaseSolver.loadsOf(m, loads)).size() <= WRITTEN_OUT) {
+            out.add(systemTable(m));
+        }
         CaseSolver.ElementLoads element = CaseSolver.loadsOf(m, loads);
         String f = Notation.sym(n.force);
         String mu = Notation.sym(n.moment);
@@ -91,7 +150,9 @@ final class StiffnessDerivation {
         }
         Derivation.Table displacements = new Derivation.Table("Solved nodal displacements (deflection down positive, rotation counter-clockwise)",
                 List.of("Node", "x (" + n.xu() + ")", "deflection (" + du + ")", "rotation (rad)"), nodes);
-        return List.of(equivalent, displacements);
+        out.add(equivalent);
+        out.add(displacements);
+        return out;
     }
 
     private static String fmt(double v) {

@@ -2,7 +2,7 @@ package org.beamfolio.derivation;
 
 /**
  * Evaluates the substituted side of a derivation step as printed: numbers with thousands
- * separators, units in brackets (skipped), + − × / ( ) and a postfix ². Used by the tests to
+ * separators, units in brackets (skipped), + − × / ( ) and postfix powers ² to ⁷. Used by the tests to
  * re-evaluate what the package prints.
  */
 final class Arithmetic {
@@ -67,10 +67,19 @@ final class Arithmetic {
 
     private double power() {
         double v = unary();
-        while (eat('²')) {
-            v *= v;
+        while (true) {
+            int power = "²³⁴⁵⁶⁷".indexOf(peek()) + 2;
+            if (power < 2) {
+                return v;
+            }
+            i++;
+            v = Math.pow(v, power);
         }
-        return v;
+    }
+
+    private char peek() {
+        blank();
+        return i < s.length() ? s.charAt(i) : ' ';
     }
 
     private double unary() {

@@ -87,6 +87,62 @@ class DerivationTest {
         assertEquals(ra, check, 1e-9 * Math.abs(ra), "moments about B agree with vertical equilibrium");
     }
 
+    @Test
+    void simpleSpanDeflectionIsWorkedByItsClosedForm() {
+        // 5 w L^4 / (384 EI), AISC Manual Table 3-23 case 1: w = 10 kN/m, L = 6 m, EI = 2e7 N*m^2 (TestJobs), by hand
+        // 5 x 10,000 x 1,296 / (384 x 2e7) = 0.0084375 m = 8.4375 mm
+        AnalysisResult r = TestJobs.solve(TestJobs.text("6 m", "    - { at: 0 m, type: pin }\n    - { at: 6 m, type: roller }\n",
+                "  - { case: D, type: uniform, w: 10 kN/m }\n"));
+        List<Step> steps = Derivations.of(r, r.combinations().get(0)).steps();
+        Step mid = steps.stream().filter(s -> s.statement().startsWith("Deflection at the middle of span 1")).findFirst().orElseThrow();
+        assertEquals("δ = 5 w L⁴ / (384 E I)", mid.symbolic());
+        assertEquals(8.4375, Arithmetic.evaluate(mid.substituted().substring(4)), 1e-3, mid.substituted());
+        assertEquals(8.4375, mid.value(), 1e-9);
+        readBack(steps);
+    }
+
+    @Test
+    void pointLoadClosedFormAgreesWithTheElasticCurve() {
+        // P b (3 L^2 - 4 b^2) / (48 EI), AISC Manual Table 3-23 case 8 at mid-span: P = 25 kN, b = 2 m, L = 6 m, by hand
+        // 25,000 x 2 x (108 - 16) / (48 x 2e7) = 0.00479167 m = 4.79167 mm
+        AnalysisResult r = TestJobs.solve(TestJobs.text("6 m", "    - { at: 0 m, type: pin }\n    - { at: 6 m, type: roller }\n",
+                "  - { case: D, type: point, P: 25 kN, at: 4 m }\n"));
+        List<Step> steps = Derivations.of(r, r.combinations().get(0)).steps();
+        Step mid = steps.stream().filter(s -> s.statement().startsWith("Deflection at the middle of span 1")).findFirst().orElseThrow();
+        assertEquals(4.79167, mid.value(), 1e-4);
+        readBack(steps);
+    }
+
+    @Test
+    void stiffnessMethodWritesOutKAndFAndTheyHoldWithTheSolution() {
+        AnalysisResult r = TestJobs.solve(TestJobs.text("6 m",
+                "    - { at: 0 m, type: pin }\n    - { at: 3 m, type: spring, k: 900 kN/m }\n    - { at: 6 m, type: roller }\n",
+                "  - { case: D, type: uniform, w: 10 kN/m }\n"));
+        assertEquals(Derivations.Method.STIFFNESS, Derivations.methodFor(r));
+        Derivation d = Derivations.of(r, r.combinations().get(0));
+        Derivation.Table k = d.tables().stream().filter(t -> t.title().startsWith("Stiffness equations K d = f")).findFirst().orElseThrow();
+        // nodes at 0, 3, 6 m: free unknowns theta1, v2, theta2, theta3
+        assertEquals(List.of("Unknown", "θ1", "v2", "θ2", "θ3", "d (m, rad)", "f (kN, kN·m)"), k.header());
+        int size = k.rows().size();
+        for (List<String> row : k.rows()) {
+            double sum = 0;
+            double scale = 0;
+            for (int j = 0; j < size; j++) {
+                double term = number(row.get(1 + j)) * number(k.rows().get(j).get(1 + size));
+                sum += term;
+                scale += Math.abs(term);
+            }
+            // four printed figures in each K and d: the row's sum agrees with f to that precision
+            assertEquals(number(row.get(2 + size)), sum, 2e-3 * scale + 1e-9, "row " + row.get(0) + " of K d = f");
+        }
+        // the spring's row carries 12 EI / L^3 twice (two 3 m elements) plus k: 2 x 12 x 2e4 [kN·m²] / 27 [m³] + 900 = 18,677.8 kN/m, by hand
+        assertEquals(18677.8, number(k.rows().get(1).get(2)), 0.5, "printed to five figures");
+    }
+
+    private static double number(String printed) {
+        return Arithmetic.evaluate(printed);
+    }
+
     static Stream<Arguments> everyKindOfBeam() {
         List<Arguments> out = new ArrayList<>();
         out.add(Arguments.of("statics", "    - { at: 0.5 m, type: pin }\n    - { at: 4.5 m, type: roller }\n"));
@@ -171,10 +227,10 @@ class DerivationTest {
         AnalysisResult r = TestJobs.solve(TestJobs.text("6 m", "    - { at: 0 m, type: pin }\n    - { at: 3 m, type: spring, k: 900 kN/m }\n"
                 + "    - { at: 6 m, type: roller }\n", "  - { case: D, type: uniform, w: 10 kN/m }\n"));
         Derivation d = Derivations.of(r, r.combinations().get(0));
-        assertEquals(3, d.tables().size());
-        Derivation.Table loads = d.tables().get(0);
+        assertEquals(4, d.tables().size(), "K d = f, nodal loads, displacements, area method");
+        Derivation.Table loads = d.tables().get(1);
         assertEquals(List.of("1", "0 to 3", "10", "10", "-15", "-7.5", "-15", "7.5"), loads.rows().get(0), "w l / 2 = 15 kN, w l^2 / 12 = 7.5 kN*m");
-        Derivation.Table nodes = d.tables().get(1);
+        Derivation.Table nodes = d.tables().get(2);
         assertEquals("0", nodes.rows().get(0).get(2), "no deflection at the pin");
     }
 
