@@ -32,7 +32,7 @@ final class LoadTerms {
         int i = 1;
         for (Load l : loads) {
             if (l instanceof Load.Distributed d && d.resultant() != 0) {
-                used.add(steps.add("Resultant of line load " + i + " (" + d.loadCase() + ", factored), from " + Steps.n(n.x(d.from()), n.xu())
+                used.add(steps.add("Resultant of line load " + i + " (" + d.loadCase() + ", as combined), from " + Steps.n(n.x(d.from()), n.xu())
                                 + " to " + Steps.n(n.x(d.to()), n.xu()),
                         "F = (w1 + w2) / 2 × (x2 − x1), acting at x = x1 + (x2 − x1)(w1 + 2 w2) / (3 (w1 + w2))",
                         "F = (" + Steps.n(n.w(d.wStart()), n.wu()) + " + " + Steps.n(n.w(d.wEnd()), n.wu()) + ") / 2 × ("
@@ -59,7 +59,7 @@ final class LoadTerms {
 
     String forceSum() {
         if (!writtenOut()) {
-            return "ΣF of the " + loads.size() + " factored loads";
+            return "ΣF of the " + loads.size() + " loads of the combination (each case times its factor)";
         }
         List<String> terms = new ArrayList<>();
         for (Load l : loads) {
@@ -73,7 +73,7 @@ final class LoadTerms {
     /** The terms of F (x - x0) - M, in report units, each with its lever arm. */
     String momentSum(double x0) {
         if (!writtenOut()) {
-            return "Σ[F (x − x0) − M] of the " + loads.size() + " factored loads";
+            return "Σ[F (x − x0) − M] of the " + loads.size() + " loads of the combination (each case times its factor)";
         }
         List<String> terms = new ArrayList<>();
         for (Load l : loads) {

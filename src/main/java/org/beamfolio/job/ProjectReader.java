@@ -83,7 +83,19 @@ final class ProjectReader {
                 paper = value.equals("a4") ? ReportSettings.Paper.A4 : ReportSettings.Paper.LETTER;
             }
         }
+        ReportSettings.Positions positions = ReportSettings.Positions.DECIMAL;
+        YamlNode at = f.optional("positions");
+        if (at != null) {
+            String value = context.choice(at, f.path("positions"), List.of("decimal", "ft-in"));
+            if ("ft-in".equals(value)) {
+                if (units == ReportSettings.UnitSystem.US) {
+                    positions = ReportSettings.Positions.FEET_INCHES;
+                } else {
+                    context.error(at, f.path("positions"), "feet and inches need US units (report.units: US); SI positions print in m");
+                }
+            }
+        }
         f.rejectUnknown();
-        return new ReportSettings(units, paper);
+        return new ReportSettings(units, paper, positions);
     }
 }

@@ -1,8 +1,17 @@
 package org.beamfolio.model;
 
-/** How the package is reported: its unit system and paper size. */
-public record ReportSettings(UnitSystem units, Paper paper) {
+/**
+ * How the package is reported: its unit system, paper size, and how positions along the beam
+ * print (decimal in the report's length unit, or, for US units, feet and inches: 9'-6").
+ */
+public record ReportSettings(UnitSystem units, Paper paper, Positions positions) {
     public enum UnitSystem { US, SI }
 
     public enum Paper { LETTER, A4 }
+
+    public enum Positions { DECIMAL, FEET_INCHES }
+
+    public ReportSettings(UnitSystem units, Paper paper) {
+        this(units, paper, Positions.DECIMAL);
+    }
 }

@@ -108,12 +108,16 @@ final class CombinationPart {
         List<String> mTerms = new ArrayList<>();
         double sumR = 0;
         double sumRM = 0;
+        double forceScale = 0;
+        double momentScale = 0;
         for (int i = 0; i < supports.size(); i++) {
             rNames.add("R" + (i + 1));
+            forceScale += Math.abs(r.reactionForce()[i]);
             rValues.add(t.force(r.reactionForce()[i]));
             sumR += r.reactionForce()[i];
             double m = r.reactionForce()[i] * supports.get(i).at() + r.reactionMoment()[i];
             sumRM += m;
+            momentScale += Math.abs(m);
             mTerms.add("(" + t.force(r.reactionForce()[i]) + ")(" + t.len(supports.get(i).at()) + ")"
                     + (r.reactionMoment()[i] != 0 ? " + (" + t.moment(r.reactionMoment()[i]) + ")" : ""));
         }
@@ -125,16 +129,18 @@ final class CombinationPart {
         for (Map.Entry<String, double[]> f : factoredTotals(c).entrySet()) {
             applied += f.getValue()[0];
             appliedMoment += f.getValue()[1];
+            forceScale += Math.abs(f.getValue()[0]);
+            momentScale += Math.abs(f.getValue()[1]);
             loadTerms.add(t.force(f.getValue()[0]) + " (" + f.getKey() + ")");
             loadMomentTerms.add("(" + t.moment(f.getValue()[1]) + ") (" + f.getKey() + ")");
         }
-        double residualForce = sumR - applied;
-        double residualMoment = sumRM + appliedMoment;
+        double residualForce = clean(sumR - applied, forceScale);
+        double residualMoment = clean(sumRM + appliedMoment, momentScale);
         List<ReportModel.Equation> out = new ArrayList<>();
-        out.add(new ReportModel.Equation("Vertical equilibrium" + pattern, "ΣFy = Σ R − Σ factored loads = 0",
+        out.add(new ReportModel.Equation("Vertical equilibrium" + pattern, "ΣFy = Σ R − Σ combined loads = 0",
                 String.join(" + ", rValues) + " − [" + String.join(" + ", loadTerms) + "] = " + t.force(sumR) + " − " + t.force(applied),
                 "residual " + t.force(residualForce), "statics: sum of vertical forces"));
-        out.add(new ReportModel.Equation("Moment equilibrium about x = 0 (ccw +)", "ΣM₀ = Σ R·x + Σ M_R + Σ M of the factored loads = 0",
+        out.add(new ReportModel.Equation("Moment equilibrium about x = 0 (ccw +)", "ΣM₀ = Σ R·x + Σ M_R + Σ M of the combined loads = 0",
                 String.join(" + ", mTerms) + " + [" + String.join(" + ", loadMomentTerms) + "] = " + t.moment(sumRM) + " + ("
                         + t.moment(appliedMoment) + ")",
                 "residual " + t.moment(residualMoment), "statics: sum of moments about the left end"));
@@ -216,9 +222,9 @@ final class CombinationPart {
         return Math.max(Math.abs(f.max().value()), Math.abs(f.min().value()));
     }
 
-    /** Round-off (a value below 1e-10 of the diagram's largest) printed as the zero it stands for. */
+    /** Round-off (a value below 1e-10 of the largest of its kind) printed as the zero it stands for. */
     private static double clean(double value, double scale) {
-        return Math.abs(value) <= 1e-10 * scale ? 0 : value;
+        return Texts.clean(value, scale);
     }
 
     /** The equilibrium check of every combination and arrangement, one row each. */
@@ -232,19 +238,27 @@ final class CombinationPart {
             }
             double sumR = 0;
             double sumM = 0;
+            double forceScale = 0;
+            double momentScale = 0;
             for (int i = 0; i < supports.size(); i++) {
+                double m = c.response().reactionForce()[i] * supports.get(i).at() + c.response().reactionMoment()[i];
                 sumR += c.response().reactionForce()[i];
-                sumM += c.response().reactionForce()[i] * supports.get(i).at() + c.response().reactionMoment()[i];
+                sumM += m;
+                forceScale += Math.abs(c.response().reactionForce()[i]);
+                momentScale += Math.abs(m);
             }
             double applied = 0;
             double appliedMoment = 0;
             for (double[] v : factoredTotals(c).values()) {
                 applied += v[0];
                 appliedMoment += v[1];
+                forceScale += Math.abs(v[0]);
+                momentScale += Math.abs(v[1]);
             }
-            rows.add(List.of(c.name(), t.force(sumR), t.force(applied), t.force(sumR - applied), t.moment(sumM + appliedMoment)));
+            rows.add(List.of(c.name(), t.force(sumR), t.force(applied), t.force(clean(sumR - applied, forceScale)),
+                    t.moment(clean(sumM + appliedMoment, momentScale))));
         }
-        return new ReportModel.Table(List.of("Combination", "Σ R", "Σ factored loads", "Residual ΣFy", "Residual ΣM about x = 0"), rows);
+        return new ReportModel.Table(List.of("Combination", "Σ R", "Σ combined loads", "Residual ΣFy", "Residual ΣM about x = 0"), rows);
     }
 
     ReportModel.Envelope envelope() {

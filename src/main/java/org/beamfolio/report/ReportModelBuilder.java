@@ -35,7 +35,7 @@ final class ReportModelBuilder {
 
     ReportModelBuilder(AnalysisResult result) {
         this.result = result;
-        this.t = new Texts(ReportUnits.of(result.job().report().units()));
+        this.t = new Texts(ReportUnits.of(result.job().report().units()), result.job().report().positions());
     }
 
     Built build(List<CheckOutcome> checks) {

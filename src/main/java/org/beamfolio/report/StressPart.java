@@ -75,9 +75,11 @@ final class StressPart {
             double sumAy = 0;
             double sumI = 0;
             for (SectionProperties.Part p : s.parts()) {
+                // A·d² of a part centred on the axis is zero; its round-off is printed as such
+                double transfer = Texts.clean(p.transferInertia(), s.inertia());
                 parts.add(List.of(t.plain(p.b(), u.sectionLength()) + " × " + t.plain(p.h(), u.sectionLength()),
                         t.plain(p.area(), u.area()), t.plain(p.centroid(), u.sectionLength()), t.plain(p.area() * p.centroid(), u.firstMoment()),
-                        t.plain(p.ownInertia(), u.secondMoment()), t.plain(p.transferInertia(), u.secondMoment())));
+                        t.plain(p.ownInertia(), u.secondMoment()), t.plain(transfer, u.secondMoment())));
                 sumA += p.area();
                 sumAy += p.area() * p.centroid();
                 sumI += p.ownInertia() + p.transferInertia();

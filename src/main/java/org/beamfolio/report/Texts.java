@@ -1,5 +1,6 @@
 package org.beamfolio.report;
 
+import org.beamfolio.model.ReportSettings;
 import org.beamfolio.units.Numbers;
 import org.beamfolio.results.ReportUnits;
 import org.beamfolio.units.Unit;
@@ -7,17 +8,42 @@ import org.beamfolio.units.Unit;
 /** Quantities as the package prints them: rounded by {@link Numbers}, with their unit. */
 final class Texts {
     private final ReportUnits u;
+    private final ReportSettings.Positions positions;
 
-    Texts(ReportUnits units) {
+    Texts(ReportUnits units, ReportSettings.Positions positions) {
         this.u = units;
+        this.positions = positions;
     }
 
     ReportUnits units() {
         return u;
     }
 
+    /** A position or length along the beam: decimal, or in feet and inches when the job asks (9'-6"). */
     String len(double metres) {
-        return q(metres, u.length());
+        return positions == ReportSettings.Positions.FEET_INCHES ? feetInches(metres) : q(metres, u.length());
+    }
+
+    /**
+     * Feet and inches to the nearest sixteenth of an inch (9'-6", 12'-3 1/4", 0'-8"), the way US
+     * drawings give positions (common practice); a negative value keeps its sign in front.
+     */
+    static String feetInches(double metres) {
+        long sixteenths = Math.round(Math.abs(metres) / 0.0254 * 16);
+        long feet = sixteenths / (12 * 16);
+        long rest = sixteenths % (12 * 16);
+        long inches = rest / 16;
+        long fraction = rest % 16;
+        String inchText = Long.toString(inches);
+        if (fraction != 0) {
+            long denominator = 16;
+            while (fraction % 2 == 0) {
+                fraction /= 2;
+                denominator /= 2;
+            }
+            inchText += " " + fraction + "/" + denominator;
+        }
+        return (metres < 0 && sixteenths != 0 ? "-" : "") + feet + "'-" + inchText + "\"";
     }
 
     String q(double si, Unit unit) {
@@ -46,5 +72,13 @@ final class Texts {
 
     static String symbol(Unit unit) {
         return unit.symbol().replace("*", "·").replace("^2", "²").replace("^3", "³").replace("^4", "⁴");
+    }
+
+    /**
+     * Round-off printed as the zero it stands for: a value within 1e-10 of the largest of its kind
+     * (the diagram's largest value, the terms summed to a residual, the section's I).
+     */
+    static double clean(double value, double scale) {
+        return Math.abs(value) <= 1e-10 * scale ? 0 : value;
     }
 }
