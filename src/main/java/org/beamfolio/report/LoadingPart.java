@@ -40,7 +40,7 @@ final class LoadingPart {
             String id = "loading-" + i++;
             drawings.put(id, new LoadingDiagram(sketch(c)));
             String description = job.cases().getOrDefault(c, "");
-            figures.add(new ReportModel.Figure(id, "Case " + c + (description.isEmpty() ? "" : " (" + description + ")"), "34mm"));
+            figures.add(new ReportModel.Figure(id, "Case " + c + (description.isEmpty() ? "" : " (" + description + ")"), "40mm"));
         }
         List<List<String>> combos = new ArrayList<>();
         for (CombinationResult c : result.combinations()) {
