@@ -1,0 +1,27 @@
+package org.beamfolio.design.steel;
+
+import org.beamfolio.catalogue.Shape;
+import org.beamfolio.catalogue.SteelGrade;
+
+/**
+ * A catalogue shape of a steel with its yield and tensile strengths and E (SI), to an edition of
+ * AISC 360: what every limit state reads.
+ */
+public record SteelMember(Shape shape, double fy, double fu, double e, Edition edition) {
+    public SteelMember {
+        if (!(fy > 0) || !(fu >= fy) || !(e > 0)) {
+            throw new IllegalArgumentException(shape + ": Fy, Fu and E must be positive with Fu >= Fy, got Fy = "
+                    + fy + " Pa, Fu = " + fu + " Pa, E = " + e + " Pa");
+        }
+    }
+
+    /** The shape in a grade: Fy for its family (A500 Grade C differs for round HSS), Fu and E of the grade. */
+    public static SteelMember of(Shape shape, SteelGrade grade, Edition edition) {
+        return new SteelMember(shape, grade.fy(shape.family()), grade.fu(), grade.elasticModulus(), edition);
+    }
+
+    /** Sqrt(E/Fy), the root of most slenderness limits. */
+    double rootEOverFy() {
+        return Math.sqrt(e / fy);
+    }
+}
