@@ -21,14 +21,9 @@ public record Equation(String number, Value result, String template, List<Value>
 
     public Equation {
         inputs = List.copyOf(inputs);
-        Map<String, Value> bySymbol = new HashMap<>();
-        for (Value v : inputs) {
-            bySymbol.put(v.symbol(), v);
-        }
-        Matcher m = PLACEHOLDER.matcher(template);
-        while (m.find()) {
-            if (!bySymbol.containsKey(m.group(1))) {
-                throw new IllegalArgumentException("equation " + number + ": no input named " + m.group(1));
+        for (String symbol : Expression.of(template).symbols()) {
+            if (inputs.stream().noneMatch(v -> v.symbol().equals(symbol))) {
+                throw new IllegalArgumentException("equation " + number + ": no input named " + symbol);
             }
         }
     }

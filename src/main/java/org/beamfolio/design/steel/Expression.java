@@ -1,131 +1,190 @@
 package org.beamfolio.design.steel;
 
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Map;
+import java.util.concurrent.ConcurrentHashMap;
 
 /**
- * Evaluates an equation's template: numbers, {@code {symbol}}, + - * / ^ (right-associative),
- * unary minus, parentheses, {@code sqrt(..)} and {@code pi}. The strength is computed from the
- * same text that is printed, so the printed equation and the number cannot disagree.
+ * An equation's template, parsed: numbers, {@code {symbol}}, + - * / ^ (right-associative), unary
+ * minus, parentheses and brackets, {@code sqrt(..)} and {@code pi}. The strength is computed from
+ * the same text that is printed, so the printed equation and the number cannot disagree. Templates
+ * are a fixed set written in the limit-state classes, so each is parsed once and kept.
  */
 final class Expression {
-    private final String text;
-    private final Map<String, Value> values;
-    private int pos;
+    /** A parsed template: evaluates from the known values. */
+    private interface Node {
+        double at(Map<String, Value> values);
+    }
 
-    private Expression(String text, Map<String, Value> values) {
-        this.text = text;
-        this.values = values;
+    private static final Map<String, Expression> PARSED = new ConcurrentHashMap<>();
+
+    private final Node root;
+    private final List<String> symbols;
+
+    private Expression(Node root, List<String> symbols) {
+        this.root = root;
+        this.symbols = List.copyOf(symbols);
+    }
+
+    static Expression of(String template) {
+        return PARSED.computeIfAbsent(template, t -> new Parser(t).parse());
     }
 
     static double evaluate(String template, Map<String, Value> values) {
-        Expression e = new Expression(template, values);
-        double v = e.sum();
-        e.skipSpaces();
-        if (e.pos != template.length()) {
-            throw e.error("unexpected text");
-        }
-        return v;
+        return of(template).evaluate(values);
     }
 
-    private double sum() {
-        double v = product();
-        while (true) {
-            if (eat('+')) {
-                v += product();
-            } else if (eat('-')) {
-                v -= product();
-            } else {
+    double evaluate(Map<String, Value> values) {
+        return root.at(values);
+    }
+
+    /** The symbols the template names, in order of first appearance. */
+    List<String> symbols() {
+        return symbols;
+    }
+
+    private static final class Parser {
+        private final String text;
+        private final List<String> symbols = new ArrayList<>();
+        private int pos;
+
+        Parser(String text) {
+            this.text = text;
+        }
+
+        Expression parse() {
+            Node n = sum();
+            skipSpaces();
+            if (pos != text.length()) {
+                throw error("unexpected text");
+            }
+            return new Expression(n, symbols);
+        }
+
+        private Node sum() {
+            Node v = product();
+            while (true) {
+                Node left = v;
+                if (eat('+')) {
+                    Node right = product();
+                    v = m -> left.at(m) + right.at(m);
+                } else if (eat('-')) {
+                    Node right = product();
+                    v = m -> left.at(m) - right.at(m);
+                } else {
+                    return v;
+                }
+            }
+        }
+
+        private Node product() {
+            Node v = power();
+            while (true) {
+                Node left = v;
+                if (eat('*')) {
+                    Node right = power();
+                    v = m -> left.at(m) * right.at(m);
+                } else if (eat('/')) {
+                    Node right = power();
+                    v = m -> left.at(m) / right.at(m);
+                } else {
+                    return v;
+                }
+            }
+        }
+
+        private Node power() {
+            Node base = unary();
+            if (eat('^')) {
+                Node exponent = power();
+                return m -> Math.pow(base.at(m), exponent.at(m));
+            }
+            return base;
+        }
+
+        private Node unary() {
+            if (eat('-')) {
+                Node operand = unary();
+                return m -> -operand.at(m);
+            }
+            return atom();
+        }
+
+        private Node atom() {
+            skipSpaces();
+            if (eat('(')) {
+                Node v = sum();
+                expect(')');
                 return v;
             }
-        }
-    }
-
-    private double product() {
-        double v = power();
-        while (true) {
-            if (eat('*')) {
-                v *= power();
-            } else if (eat('/')) {
-                v /= power();
-            } else {
+            if (eat('[')) {
+                Node v = sum();
+                expect(']');
                 return v;
             }
-        }
-    }
-
-    private double power() {
-        double base = unary();
-        return eat('^') ? Math.pow(base, power()) : base;
-    }
-
-    private double unary() {
-        return eat('-') ? -unary() : atom();
-    }
-
-    private double atom() {
-        skipSpaces();
-        if (eat('(')) {
-            double v = sum();
-            expect(')');
-            return v;
-        }
-        if (eat('[')) {
-            double v = sum();
-            expect(']');
-            return v;
-        }
-        if (eat('{')) {
-            int close = text.indexOf('}', pos);
-            String symbol = text.substring(pos, close);
-            pos = close + 1;
-            Value v = values.get(symbol);
-            if (v == null) {
-                throw error("no value for " + symbol);
+            if (eat('{')) {
+                int close = text.indexOf('}', pos);
+                if (close < 0) {
+                    throw error("no closing }");
+                }
+                String symbol = text.substring(pos, close);
+                pos = close + 1;
+                if (!symbols.contains(symbol)) {
+                    symbols.add(symbol);
+                }
+                return m -> {
+                    Value v = m.get(symbol);
+                    if (v == null) {
+                        throw new IllegalArgumentException("no value for " + symbol + " in: " + text);
+                    }
+                    return v.value();
+                };
             }
-            return v.value();
+            if (text.startsWith("sqrt(", pos)) {
+                pos += 5;
+                Node v = sum();
+                expect(')');
+                return m -> Math.sqrt(v.at(m));
+            }
+            if (text.startsWith("pi", pos)) {
+                pos += 2;
+                return m -> Math.PI;
+            }
+            int start = pos;
+            while (pos < text.length() && (Character.isDigit(text.charAt(pos)) || text.charAt(pos) == '.')) {
+                pos++;
+            }
+            if (start == pos) {
+                throw error("expected a number, a {symbol} or (");
+            }
+            double constant = Double.parseDouble(text.substring(start, pos));
+            return m -> constant;
         }
-        if (text.startsWith("sqrt(", pos)) {
-            pos += 5;
-            double v = sum();
-            expect(')');
-            return Math.sqrt(v);
-        }
-        if (text.startsWith("pi", pos)) {
-            pos += 2;
-            return Math.PI;
-        }
-        int start = pos;
-        while (pos < text.length() && (Character.isDigit(text.charAt(pos)) || text.charAt(pos) == '.')) {
-            pos++;
-        }
-        if (start == pos) {
-            throw error("expected a number, a {symbol} or (");
-        }
-        return Double.parseDouble(text.substring(start, pos));
-    }
 
-    private boolean eat(char c) {
-        skipSpaces();
-        if (pos < text.length() && text.charAt(pos) == c) {
-            pos++;
-            return true;
+        private boolean eat(char c) {
+            skipSpaces();
+            if (pos < text.length() && text.charAt(pos) == c) {
+                pos++;
+                return true;
+            }
+            return false;
         }
-        return false;
-    }
 
-    private void expect(char c) {
-        if (!eat(c)) {
-            throw error("expected " + c);
+        private void expect(char c) {
+            if (!eat(c)) {
+                throw error("expected " + c);
+            }
         }
-    }
 
-    private void skipSpaces() {
-        while (pos < text.length() && text.charAt(pos) == ' ') {
-            pos++;
+        private void skipSpaces() {
+            while (pos < text.length() && text.charAt(pos) == ' ') {
+                pos++;
+            }
         }
-    }
 
-    private IllegalArgumentException error(String what) {
-        return new IllegalArgumentException(what + " at " + pos + " in: " + text);
+        private IllegalArgumentException error(String what) {
+            return new IllegalArgumentException(what + " at " + pos + " in: " + text);
+        }
     }
 }

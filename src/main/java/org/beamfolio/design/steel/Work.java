@@ -4,8 +4,6 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
-import java.util.regex.Matcher;
-import java.util.regex.Pattern;
 
 /**
  * The equations of one limit state as they are worked: values given (from the shape and the
@@ -13,8 +11,6 @@ import java.util.regex.Pattern;
  * A result becomes a known value for the equations after it.
  */
 final class Work {
-    private static final Pattern PLACEHOLDER = Pattern.compile("\\{([^}]+)}");
-
     private final Map<String, Value> known = new LinkedHashMap<>();
     private final List<Equation> equations = new ArrayList<>();
 
@@ -66,11 +62,10 @@ final class Work {
     }
 
     private List<Value> inputsOf(String template) {
-        Map<String, Value> used = new LinkedHashMap<>();
-        Matcher m = PLACEHOLDER.matcher(template);
-        while (m.find()) {
-            used.putIfAbsent(m.group(1), value(m.group(1)));
+        List<Value> used = new ArrayList<>();
+        for (String symbol : Expression.of(template).symbols()) {
+            used.add(value(symbol));
         }
-        return List.copyOf(used.values());
+        return used;
     }
 }
