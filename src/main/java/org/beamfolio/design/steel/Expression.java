@@ -79,14 +79,14 @@ final class Expression {
         }
 
         private Node product() {
-            Node v = power();
+            Node v = unary();
             while (true) {
                 Node left = v;
                 if (eat('*')) {
-                    Node right = power();
+                    Node right = unary();
                     v = m -> left.at(m) * right.at(m);
                 } else if (eat('/')) {
-                    Node right = power();
+                    Node right = unary();
                     v = m -> left.at(m) / right.at(m);
                 } else {
                     return v;
@@ -94,21 +94,22 @@ final class Expression {
             }
         }
 
-        private Node power() {
-            Node base = unary();
-            if (eat('^')) {
-                Node exponent = power();
-                return m -> Math.pow(base.at(m), exponent.at(m));
-            }
-            return base;
-        }
-
+        /** A minus sign binds more loosely than a power: -a^2 is -(a^2). */
         private Node unary() {
             if (eat('-')) {
                 Node operand = unary();
                 return m -> -operand.at(m);
             }
-            return atom();
+            return power();
+        }
+
+        private Node power() {
+            Node base = atom();
+            if (eat('^')) {
+                Node exponent = unary();
+                return m -> Math.pow(base.at(m), exponent.at(m));
+            }
+            return base;
         }
 
         private Node atom() {
