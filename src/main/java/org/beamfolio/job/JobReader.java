@@ -22,6 +22,7 @@ import org.beamfolio.model.Material;
 import org.beamfolio.model.Project;
 import org.beamfolio.model.ReportSettings;
 import org.beamfolio.model.Section;
+import org.beamfolio.model.SteelDesign;
 import org.beamfolio.units.Dimension;
 import org.beamfolio.units.Lengths;
 
@@ -162,12 +163,18 @@ public final class JobReader {
             if (combos != null && combos.stressCheck() && beam != null) {
                 requireAllowables(top, materials, beam);
             }
+            ReadContext.Fields design = top.optional("design") == null ? null : context.fields(top.optional("design"), "design");
+            SteelDesign steel = SteelDesignReader.read(context, design, combos == null ? null : combos.setName(), beam,
+                    materials, sections, sectionsNode, materialsNode);
+            if (design != null) {
+                design.rejectUnknown();
+            }
             top.rejectUnknown();
             if (!context.diagnostics().isEmpty() || project == null || beam == null || combos == null) {
                 return null;
             }
             return new Job(name, text, sha256(bytes), project, report, materials, sections, beam, loads, cases,
-                    combos.setName(), combos.combinations(), combos.pattern(), combos.stressCheck(), combos.deflection(), bytes);
+                    combos.setName(), combos.combinations(), combos.pattern(), combos.stressCheck(), combos.deflection(), bytes, steel);
         }
 
         /** A stress check compares with the allowables, so every material on the beam must give them. */

@@ -9,12 +9,13 @@ import java.util.Map;
  * @param combinationSet the built-in set's name, or null for an explicit list
  * @param combinations the combinations the job states (a built-in set is expanded by the analysis)
  * @param sourceBytes the job file exactly as read, for the package's attachment
+ * @param steelDesign steel design to AISC 360 ({@code design.steel}), or null when the job asks for none
  */
 public record Job(String name, String sourceText, String sha256, Project project, ReportSettings report,
                   Map<String, Material> materials, Map<String, Section> sections, Beam beam,
                   List<Load> loads, Map<String, String> cases, String combinationSet,
                   List<Combination> combinations, List<String> pattern, boolean stressCheck,
-                  List<DeflectionLimit> deflectionLimits, byte[] sourceBytes) {
+                  List<DeflectionLimit> deflectionLimits, byte[] sourceBytes, SteelDesign steelDesign) {
     public Job {
         sourceBytes = sourceBytes.clone();
         materials = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(materials));
@@ -24,6 +25,16 @@ public record Job(String name, String sourceText, String sha256, Project project
         combinations = List.copyOf(combinations);
         pattern = List.copyOf(pattern);
         deflectionLimits = List.copyOf(deflectionLimits);
+    }
+
+    /** A job without design to a specification. */
+    public Job(String name, String sourceText, String sha256, Project project, ReportSettings report,
+               Map<String, Material> materials, Map<String, Section> sections, Beam beam,
+               List<Load> loads, Map<String, String> cases, String combinationSet,
+               List<Combination> combinations, List<String> pattern, boolean stressCheck,
+               List<DeflectionLimit> deflectionLimits, byte[] sourceBytes) {
+        this(name, sourceText, sha256, project, report, materials, sections, beam, loads, cases, combinationSet,
+                combinations, pattern, stressCheck, deflectionLimits, sourceBytes, null);
     }
 
     @Override

@@ -115,6 +115,29 @@ public final class ResultsWriter {
             g.writeStringField("combination", check.combination());
             g.writeNumberField("at", u.length().fromSi(check.at()));
             g.writeStringField("unit", check.unit());
+            if (check.kind() != null) {
+                g.writeStringField("kind", check.kind());
+            }
+            if (check.clause() != null) {
+                g.writeStringField("clause", check.clause());
+            }
+            if (check.limitState() != null) {
+                g.writeStringField("limit_state", check.limitState());
+            }
+            if (!check.segment().isEmpty()) {
+                g.writeArrayFieldStart("segment");
+                for (double x : check.segment()) {
+                    g.writeNumber(u.length().fromSi(x));
+                }
+                g.writeEndArray();
+            }
+            if (!check.factors().isEmpty()) {
+                g.writeObjectFieldStart("factors");
+                for (Map.Entry<String, Double> f : check.factors().entrySet()) {
+                    g.writeNumberField(f.getKey(), f.getValue());
+                }
+                g.writeEndObject();
+            }
             g.writeEndObject();
         }
         g.writeEndArray();
