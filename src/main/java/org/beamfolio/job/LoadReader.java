@@ -91,17 +91,19 @@ final class LoadReader {
             f.rejectUnknown("P", "M", "w", "at", "from", "to", "sense", "load", "width");
             return null;
         }
+        if (f.has("width") || f.has("load")) {
+            // the engineer meant an area load: say how to write one, not what is wrong with w
+            c.error(f.node(), f.path("type"), "a tributary width belongs to an area load: write type: area, load: <a name under"
+                    + " area_loads, which holds the pressure>, width: ...; or give the line load w without a width");
+            f.rejectUnknown("P", "M", "w", "at", "from", "to", "sense");
+            return null;
+        }
         Load load = switch (type) {
             case "point" -> point(c, f, loadCase, note, length, node.location());
             case "moment" -> couple(c, f, loadCase, note, length, node.location());
             case "uniform" -> uniform(c, f, loadCase, note, length, node.location());
             default -> linear(c, f, loadCase, note, length, node.location());
         };
-        if (f.has("width") || f.has("load")) {
-            c.error(f.node(), f.path("type"), "a tributary width belongs to an area load: write type: area, load: <a name under"
-                    + " area_loads>, width: ..., or give the line load w without a width");
-            return null;
-        }
         f.rejectUnknown();
         return loadCase == null || note == null || load == null ? null : new Entry(load, null, node.location());
     }
