@@ -102,6 +102,18 @@ public class AreaLoadJobsTest {
     }
 
     @Test
+    void theResultsFileCarriesTheReducedLiveLoadInItsReactionsByCase() throws Exception {
+        String text = job(30, "  office: { D: 15 psf, L: 50 psf, reducible: [ L ] }\n", "  live_load_reduction: { KLL: 2 }\n",
+                "  - { type: area, load: office, width: 10 ft }\n").replace("units: SI", "units: US");
+        String json = org.beamfolio.results.ResultsWriter.write(TestJobs.solve(text), List.of());
+        com.fasterxml.jackson.databind.JsonNode byCase = new com.fasterxml.jackson.databind.ObjectMapper().readTree(json).get("reactions_by_case");
+        // as above: 7500 lb x (0.25 + 15 / sqrt(600)) = 6467.8 lb at each support (ASCE/SEI 7-22 4.7.2, by hand)
+        assertEquals(7500 * (0.25 + 15 / Math.sqrt(600)), byCase.get(0).get("cases").get("L").asDouble(), 1e-6);
+        assertEquals(6467.8, byCase.get(1).get("cases").get("L").asDouble(), 0.05);
+        assertEquals(2250, byCase.get(0).get("cases").get("D").asDouble(), 1e-6);
+    }
+
+    @Test
     void widthsOnBothSidesOfTheBeamAddUpToTheTributaryArea() {
         Job j = TestJobs.job(job(20, "  office: { L: 40 psf, reducible: [ L ] }\n", "  live_load_reduction: { KLL: 2 }\n",
                 "  - { type: area, load: office, width: 6 ft }\n  - { type: area, load: office, width: [ 6 ft, 2 ft ] }\n"));
