@@ -101,6 +101,29 @@ class TakeOffPartTest {
     }
 
     @Test
+    void theRoofLiveLoadReductionIsWorkedWithR1AndR2() {
+        ReportModel.AreaLoads a = printed(job(40, "  roof: { D: 15 psf, Lr: 20 psf, reducible: [ Lr ] }\n",
+                "  roof_live_load_reduction: { rise: 6 }\n", "  - { type: area, load: roof, width: 10 ft }\n"));
+        // AT = 400 ft^2: R1 = 1.2 - 0.001 x 400 = 0.8; F = 6: R2 = 1.2 - 0.05 x 6 = 0.9;
+        // Lr = 20 x 0.8 x 0.9 = 14.4 psf, factor 0.72 (ASCE/SEI 7-22 4.8.2, by hand): 200 x 0.72 = 144 lb/ft
+        assertEquals(List.of("roof", "Lr", "20 psf × 10 ft = 200 lb/ft", "× 0.72", "144 lb/ft", "0 ft to 40 ft", ""),
+                a.takeOff().rows().get(1));
+        String w = working(a);
+        assertTrue(w.contains("R1 = 0.800; F = 6.00: R2 = 0.900"), w);
+        assertTrue(w.contains("ASCE/SEI 7-22 4.8.2"), w);
+    }
+
+    @Test
+    void anSiPackageTakesOffInKilopascalsAndSquareMetres() {
+        Job j = TestJobs.job(org.beamfolio.loads.AreaLoadJobsTest.job(30, "  office: { L: 2.4 kPa, reducible: [ L ] }\n",
+                "  live_load_reduction: { KLL: 2 }\n", "  - { type: area, load: office, width: 3 m }\n"));
+        ReportModel.AreaLoads a = new TakeOffPart(j.takeOff(), j.report().units(), new Texts(ReportUnits.of(ReportSettings.UnitSystem.SI))).build();
+        // 2.4 kPa x 3 m = 7.2 kN/m (by hand); AT = 3 m x 9.144 m = 27.43 m^2 = 295.3 ft^2
+        assertEquals("2.4 kPa × 3 m = 7.2 kN/m", a.takeOff().rows().get(0).get(2));
+        assertTrue(working(a).contains("AT = 27.43 m² (295.3 ft²)"), working(a));
+    }
+
+    @Test
     void aJobWithoutAreaLoadsPrintsNoTakeOff() {
         Job j = TestJobs.job(TestJobs.text("6 m", "    - { at: 0 m, type: pin }\n    - { at: 6 m, type: roller }\n",
                 "  - { case: D, type: uniform, w: 2 kN/m }\n"));
