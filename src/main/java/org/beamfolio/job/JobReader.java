@@ -152,18 +152,23 @@ public final class JobReader {
             Map<String, Section> sections = SectionReader.readAll(context, sectionsNode);
             YamlNode beamNode = top.required("beam");
             Beam beam = BeamReader.read(context, beamNode, Defined.keysOf(materialsNode, materials), Defined.keysOf(sectionsNode, sections));
-            List<Load> loads = LoadReader.readAll(context, top.optional("loads"), beam);
+            Defined<org.beamfolio.loads.AreaLoad> areaLoads = AreaLoadReader.readAll(context, top.optional("area_loads"));
+            YamlNode designNode = top.optional("design");
+            ReadContext.Fields design = designNode == null ? null : context.fields(designNode, "design");
+            org.beamfolio.loads.ReductionSettings reductions = designNode != null && design == null ? null
+                    : DesignReader.reductions(context, design);
+            LoadReader.Read read = LoadReader.readAll(context, top.optional("loads"), beam, areaLoads, reductions);
+            List<Load> loads = read.loads();
             Map<String, String> cases = cases(top.optional("cases"));
             if (loads.isEmpty() && (beam == null || beam.selfWeightCase() == null) && context.diagnostics().isEmpty()) {
                 YamlNode at = top.optional("loads");
                 context.error(at != null ? at.location() : root.location(), "loads",
                         "the job has no loads: add at least one load (or beam.self_weight) for there to be anything to check");
             }
-            CombinationReader.Outcome combos = CombinationReader.read(context, top, LoadCases.of(loads, beam, beamNode, top.optional("loads")), beam);
+            CombinationReader.Outcome combos = CombinationReader.read(context, top, LoadCases.of(loads, beam, beamNode, top.optional("loads"), areaLoads), beam);
             if (combos != null && combos.stressCheck() && beam != null) {
                 requireAllowables(top, materials, beam);
             }
-            ReadContext.Fields design = top.optional("design") == null ? null : context.fields(top.optional("design"), "design");
             SteelDesign steel = SteelDesignReader.read(context, design, combos == null ? null : combos.setName(), beam,
                     materials, sections, sectionsNode, materialsNode);
             if (design != null) {
@@ -174,7 +179,8 @@ public final class JobReader {
                 return null;
             }
             return new Job(name, text, sha256(bytes), project, report, materials, sections, beam, loads, cases,
-                    combos.setName(), combos.combinations(), combos.pattern(), combos.stressCheck(), combos.deflection(), bytes, steel);
+                    combos.setName(), combos.combinations(), combos.pattern(), combos.stressCheck(), combos.deflection(), bytes,
+                    read.takeOff(), steel);
         }
 
         /** A stress check compares with the allowables, so every material on the beam must give them. */

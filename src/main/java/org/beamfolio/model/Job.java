@@ -9,14 +9,28 @@ import java.util.Map;
  * @param combinationSet the built-in set's name, or null for an explicit list
  * @param combinations the combinations the job states (a built-in set is expanded by the analysis)
  * @param sourceBytes the job file exactly as read, for the package's attachment
+ * @param takeOff where the line loads that came from area loads came from, and the live load
+ *        reductions taken (those line loads are already in {@code loads}, reduced)
  * @param steelDesign steel design to AISC 360 ({@code design.steel}), or null when the job asks for none
  */
 public record Job(String name, String sourceText, String sha256, Project project, ReportSettings report,
                   Map<String, Material> materials, Map<String, Section> sections, Beam beam,
                   List<Load> loads, Map<String, String> cases, String combinationSet,
                   List<Combination> combinations, List<String> pattern, boolean stressCheck,
-                  List<DeflectionLimit> deflectionLimits, byte[] sourceBytes, SteelDesign steelDesign) {
+                  List<DeflectionLimit> deflectionLimits, byte[] sourceBytes,
+                  org.beamfolio.loads.TakeOff takeOff, SteelDesign steelDesign) {
+    /** A job of line loads only. */
+    public Job(String name, String sourceText, String sha256, Project project, ReportSettings report,
+               Map<String, Material> materials, Map<String, Section> sections, Beam beam,
+               List<Load> loads, Map<String, String> cases, String combinationSet,
+               List<Combination> combinations, List<String> pattern, boolean stressCheck,
+               List<DeflectionLimit> deflectionLimits, byte[] sourceBytes) {
+        this(name, sourceText, sha256, project, report, materials, sections, beam, loads, cases, combinationSet,
+                combinations, pattern, stressCheck, deflectionLimits, sourceBytes, org.beamfolio.loads.TakeOff.EMPTY, null);
+    }
+
     public Job {
+        java.util.Objects.requireNonNull(takeOff, "takeOff");
         sourceBytes = sourceBytes.clone();
         materials = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(materials));
         sections = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(sections));
@@ -25,16 +39,6 @@ public record Job(String name, String sourceText, String sha256, Project project
         combinations = List.copyOf(combinations);
         pattern = List.copyOf(pattern);
         deflectionLimits = List.copyOf(deflectionLimits);
-    }
-
-    /** A job without design to a specification. */
-    public Job(String name, String sourceText, String sha256, Project project, ReportSettings report,
-               Map<String, Material> materials, Map<String, Section> sections, Beam beam,
-               List<Load> loads, Map<String, String> cases, String combinationSet,
-               List<Combination> combinations, List<String> pattern, boolean stressCheck,
-               List<DeflectionLimit> deflectionLimits, byte[] sourceBytes) {
-        this(name, sourceText, sha256, project, report, materials, sections, beam, loads, cases, combinationSet,
-                combinations, pattern, stressCheck, deflectionLimits, sourceBytes, null);
     }
 
     @Override

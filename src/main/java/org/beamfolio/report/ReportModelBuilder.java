@@ -60,7 +60,7 @@ final class ReportModelBuilder {
         ReportModel.SteelSheet steel = new SteelPart(result, t).build();
         ReportModel model = new ReportModel(sheet, cover(checks, analyses, revision != null, steel != null), revision, basis(),
                 loading.build(), analyses, envelope, new ReactionsPart(result, t).build(), stresses, checks(checks), cautions(),
-                reviewChecklist(), history(), appendix(), steel);
+                reviewChecklist(), history(), appendix(), new TakeOffPart(job.takeOff(), job.report().units(), t).build(), steel);
         return new Built(model, drawings);
     }
 
@@ -179,8 +179,9 @@ final class ReportModelBuilder {
                         ? " THE MODEL IS BADLY CONDITIONED: the results satisfy equilibrium to the residuals shown, but verify the supports and"
                           + " stiffnesses; a very stiff spring or a very short span beside long ones is the usual cause." : ""));
         List<String> limitations = List.of(
-                "Sections are modelled as rectangles without fillets or rounded corners, or by closed forms; given properties are used as stated;"
-                        + " catalogue shapes use their tabulated properties.",
+                "Sections are modelled as rectangles without fillets or rounded corners, or by closed forms; given properties are used as stated"
+                        + (job.sections().values().stream().anyMatch(x -> x.shape() instanceof org.beamfolio.model.SectionShape.Catalogued)
+                        ? "; catalogue shapes use their tabulated properties." : "."),
                 "Supports are points; springs are linear. Support settlement is not included unless modelled by a spring.",
                 job.steelDesign() != null ? steelScope() + " Not checked: connections, vibration, fire, fatigue and second-order effects."
                         : "Not checked unless shown: lateral-torsional and local buckling, connections, bearing and web crippling, vibration, fire, fatigue, creep and second-order effects.");
