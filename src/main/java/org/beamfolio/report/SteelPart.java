@@ -76,12 +76,14 @@ final class SteelPart {
         List<ReportModel.Equation> bearing = new ArrayList<>();
         Map<String, SteelDesignWork.BearingRow> worst = new java.util.LinkedHashMap<>();
         for (SteelDesignWork.BearingRow row : work.bearing()) {
-            worst.merge(row.support() + row.strength().kind(), row, (a, b) -> b.ratio() > a.ratio() ? b : a);
+            worst.merge(row.support() + ":" + row.index() + row.strength().kind(), row, (a, b) -> b.ratio() > a.ratio() ? b : a);
         }
         for (SteelDesignWork.BearingRow row : worst.values()) {
             bearing.addAll(limitStates(row.strength()));
-            bearing.add(available("Support " + (row.support() + 1) + " at " + t.len(row.at()) + ", largest reaction under "
-                    + row.combination().name(), row.strength(), work.method(), row.force(), row.available(), row.ratio(), false));
+            String place = row.support() ? "Support " + (row.index() + 1) + " at " + t.len(row.at()) + ", largest reaction"
+                    : "Point loads at " + t.len(row.at()) + ", their largest sum";
+            bearing.add(available(place + " under " + row.combination().name(), row.strength(), work.method(), row.force(),
+                    row.available(), row.ratio(), false));
         }
         return new ReportModel.SteelSheet(title, member(m), catalogueRow(m), compactness(m), segmentTable(segments),
                 flexureNote, flexure, shearEqs, bearing);

@@ -9,6 +9,7 @@ import org.beamfolio.analysis.AnalysisResult;
 import org.beamfolio.analysis.UnbracedSegments;
 import org.beamfolio.results.CheckOutcome;
 import org.beamfolio.results.ReportUnits;
+import org.beamfolio.units.Numbers;
 import org.beamfolio.units.Unit;
 import org.beamfolio.units.Units;
 
@@ -58,13 +59,15 @@ public final class SteelChecks {
         });
         Map<String, SteelDesignWork.BearingRow> bearing = new LinkedHashMap<>();
         for (SteelDesignWork.BearingRow row : work.bearing()) {
-            String id = row.strength().kind().replace(' ', '-') + "-support" + (row.support() + 1);
+            String id = row.strength().kind().replace(' ', '-') + (row.support() ? "-support" : "-load") + (row.index() + 1);
             bearing.merge(id, row, (a, b) -> b.ratio() > a.ratio() ? b : a);
         }
         for (Map.Entry<String, SteelDesignWork.BearingRow> e : bearing.entrySet()) {
             SteelDesignWork.BearingRow row = e.getValue();
             LimitStateResult governing = row.strength().governing();
-            out.add(new CheckOutcome(e.getKey(), capitalised(governing.limitState()) + " at support " + (row.support() + 1)
+            String place = row.support() ? "support " + (row.index() + 1)
+                    : "the point loads at " + Numbers.format(length.fromSi(row.at()), length.symbol());
+            out.add(new CheckOutcome(e.getKey(), capitalised(governing.limitState()) + " at " + place
                     + ", bearing length " + trim(ReportUnits.of(result.job().report().units()).sectionLength()
                             .fromSi(row.strength().factors().get("lb"))) + " "
                     + ReportUnits.of(result.job().report().units()).sectionLength().symbol() + " (" + method + ")",
