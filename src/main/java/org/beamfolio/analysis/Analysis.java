@@ -17,6 +17,7 @@ import org.beamfolio.model.Section;
 import org.beamfolio.section.SectionCalculator;
 import org.beamfolio.section.SectionProperties;
 import org.beamfolio.units.Lengths;
+import org.beamfolio.units.UnitSystem;
 
 /**
  * The analysis stage's entry point: checks the beam is stable, builds the element model, solves
@@ -26,7 +27,7 @@ public final class Analysis {
     private Analysis() {}
 
     public static AnalysisResult run(Job job) throws UnstableBeamException {
-        Optional<Instability> instability = Stability.check(job.beam(), job.report().units() == ReportSettings.UnitSystem.SI
+        Optional<Instability> instability = Stability.check(job.beam(), job.report().units() == UnitSystem.SI
                 ? Lengths.Style.METRES : Lengths.Style.FEET_AND_INCHES);
         if (instability.isPresent()) {
             throw new UnstableBeamException(instability.get());

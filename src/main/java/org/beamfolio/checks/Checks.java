@@ -3,7 +3,7 @@ package org.beamfolio.checks;
 import java.util.ArrayList;
 import java.util.List;
 import org.beamfolio.analysis.AnalysisResult;
-import org.beamfolio.results.CheckOutcome;
+import org.beamfolio.checks.CheckOutcome;
 
 /** The checks stage's entry point: every check the job asks for, in a fixed order. */
 public final class Checks {

@@ -10,8 +10,8 @@ import org.beamfolio.analysis.Field;
 import org.beamfolio.analysis.Patterns;
 import org.beamfolio.model.DeflectionLimit;
 import org.beamfolio.model.SupportKind;
-import org.beamfolio.results.CheckOutcome;
-import org.beamfolio.results.ReportUnits;
+import org.beamfolio.checks.CheckOutcome;
+import org.beamfolio.units.ReportUnits;
 
 /**
  * Deflection under the sum of the named unfactored cases against the job's limits: a span ratio

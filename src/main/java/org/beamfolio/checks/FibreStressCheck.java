@@ -4,8 +4,8 @@ import java.util.List;
 import org.beamfolio.analysis.AnalysisResult;
 import org.beamfolio.analysis.GoverningStresses;
 import org.beamfolio.analysis.StressDemand;
-import org.beamfolio.results.CheckOutcome;
-import org.beamfolio.results.ReportUnits;
+import org.beamfolio.checks.CheckOutcome;
+import org.beamfolio.units.ReportUnits;
 
 /**
  * Extreme fibre bending stress against the material's allowable, in tension and in compression:

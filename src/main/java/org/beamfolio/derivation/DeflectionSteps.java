@@ -11,7 +11,7 @@ import org.beamfolio.analysis.Response;
 import org.beamfolio.model.Load;
 import org.beamfolio.model.Material;
 import org.beamfolio.model.Support;
-import org.beamfolio.results.ReportUnits;
+import org.beamfolio.units.ReportUnits;
 import org.beamfolio.units.Unit;
 import org.beamfolio.units.Units;
 

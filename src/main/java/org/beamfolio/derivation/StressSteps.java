@@ -4,7 +4,7 @@ import java.util.List;
 import org.beamfolio.analysis.AnalysisResult;
 import org.beamfolio.analysis.GoverningStresses;
 import org.beamfolio.analysis.StressDemand;
-import org.beamfolio.results.ReportUnits;
+import org.beamfolio.units.ReportUnits;
 import org.beamfolio.section.SectionProperties;
 import org.beamfolio.units.Unit;
 

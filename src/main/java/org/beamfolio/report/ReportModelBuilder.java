@@ -17,8 +17,8 @@ import org.beamfolio.model.Material;
 import org.beamfolio.model.Project;
 import org.beamfolio.report.drawing.Drawing;
 import org.beamfolio.report.drawing.SignConventionSketch;
-import org.beamfolio.results.CheckOutcome;
-import org.beamfolio.results.ReportUnits;
+import org.beamfolio.checks.CheckOutcome;
+import org.beamfolio.units.ReportUnits;
 import org.beamfolio.results.Version;
 
 /**
@@ -39,11 +39,11 @@ final class ReportModelBuilder {
     }
 
     Built build(List<CheckOutcome> checks) {
-        return build(checks, null, List.of());
+        return build(checks, null);
     }
 
     /** With a previous revision of the job (or null), the package gets a revision-delta sheet. */
-    Built build(List<CheckOutcome> checks, AnalysisResult previous, List<CheckOutcome> previousChecks) {
+    Built build(List<CheckOutcome> checks, PreviousRevision previous) {
         Job job = result.job();
         Project p = job.project();
         ReportModel.Sheet sheet = new ReportModel.Sheet(p.title(), p.number(), p.subject(), p.revision(), p.preparedBy(),
@@ -56,7 +56,7 @@ final class ReportModelBuilder {
         ReportModel.Envelope envelope = new CombinationPart(result, t, drawings).envelope();
         ReportModel.Stresses stresses = new StressPart(result, t).build();
         ReportModel.Revision revision = previous == null ? null
-                : new RevisionPart(result, checks, previous, previousChecks, t).build();
+                : new RevisionPart(result, checks, previous.result(), previous.checks(), previous.inputs(), t).build();
         ReportModel model = new ReportModel(sheet, cover(checks, analyses, revision != null), revision, basis(), loading.build(), analyses, envelope,
                 new ReactionsPart(result, t).build(), stresses, checks(checks), cautions(), reviewChecklist(), history(), appendix(),
                 new TakeOffPart(job.takeOff(), job.report().units(), t).build());

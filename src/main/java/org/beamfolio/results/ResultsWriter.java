@@ -13,8 +13,10 @@ import org.beamfolio.analysis.Extreme;
 import org.beamfolio.analysis.Extremes;
 import org.beamfolio.analysis.ReactionEnvelope;
 import org.beamfolio.analysis.Response;
+import org.beamfolio.checks.CheckOutcome;
 import org.beamfolio.model.Support;
 import org.beamfolio.section.SectionProperties;
+import org.beamfolio.units.ReportUnits;
 import org.beamfolio.units.Unit;
 
 /**

@@ -1,8 +1,5 @@
-package org.beamfolio.results;
+package org.beamfolio.units;
 
-import org.beamfolio.model.ReportSettings;
-import org.beamfolio.units.Unit;
-import org.beamfolio.units.Units;
 
 /**
  * The units a package reports in: US reports ft, lb, lb*ft, lb/ft, psi and in (deflection, and
@@ -11,8 +8,8 @@ import org.beamfolio.units.Units;
 public record ReportUnits(Unit length, Unit force, Unit moment, Unit distributed, Unit stress, Unit deflection,
                           Unit sectionLength, Unit area, Unit firstMoment, Unit secondMoment, Unit rotationalStiffness,
                           Unit stiffness) {
-    public static ReportUnits of(ReportSettings.UnitSystem system) {
-        return system == ReportSettings.UnitSystem.SI
+    public static ReportUnits of(UnitSystem system) {
+        return system == UnitSystem.SI
                 ? new ReportUnits(Units.of("m"), Units.of("kN"), Units.of("kN*m"), Units.of("kN/m"), Units.of("MPa"),
                         Units.of("mm"), Units.of("mm"), Units.of("mm^2"), Units.of("mm^3"), Units.of("mm^4"),
                         Units.of("kN*m/rad"), Units.of("kN/mm"))

@@ -1,4 +1,4 @@
-package org.beamfolio.results;
+package org.beamfolio.checks;
 
 /**
  * One check's outcome, in report units: demand against limit, their ratio, whether it passes,
