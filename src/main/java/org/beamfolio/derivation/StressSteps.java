@@ -23,7 +23,7 @@ public final class StressSteps {
     private StressSteps(AnalysisResult result) {
         this.result = result;
         this.u = ReportUnits.of(result.job().report().units());
-        this.us = u.length().symbol().equals("ft");
+        this.us = u.us();
     }
 
     public static List<Step> of(AnalysisResult result) {

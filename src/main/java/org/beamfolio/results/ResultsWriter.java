@@ -117,6 +117,24 @@ public final class ResultsWriter {
             g.writeStringField("combination", check.combination());
             g.writeNumberField("at", u.length().fromSi(check.at()));
             g.writeStringField("unit", check.unit());
+            g.writeStringField("kind", check.kind().key());
+            g.writeStringField("clause", check.clause());
+            if (check.limitState() != null) {
+                g.writeStringField("limit_state", check.limitState());
+            }
+            if (check.segment() != null) {
+                g.writeArrayFieldStart("segment");
+                g.writeNumber(u.length().fromSi(check.segment().from()));
+                g.writeNumber(u.length().fromSi(check.segment().to()));
+                g.writeEndArray();
+            }
+            if (!check.factors().isEmpty()) {
+                g.writeObjectFieldStart("factors");
+                for (Map.Entry<String, Double> f : check.factors().entrySet()) {
+                    g.writeNumberField(f.getKey(), f.getValue());
+                }
+                g.writeEndObject();
+            }
             g.writeEndObject();
         }
         g.writeEndArray();

@@ -7,14 +7,18 @@ package org.beamfolio.units;
  */
 public record ReportUnits(Unit length, Unit force, Unit moment, Unit distributed, Unit stress, Unit deflection,
                           Unit sectionLength, Unit area, Unit firstMoment, Unit secondMoment, Unit rotationalStiffness,
-                          Unit stiffness) {
+                          Unit stiffness, UnitSystem system) {
     public static ReportUnits of(UnitSystem system) {
         return system == UnitSystem.SI
                 ? new ReportUnits(Units.of("m"), Units.of("kN"), Units.of("kN*m"), Units.of("kN/m"), Units.of("MPa"),
                         Units.of("mm"), Units.of("mm"), Units.of("mm^2"), Units.of("mm^3"), Units.of("mm^4"),
-                        Units.of("kN*m/rad"), Units.of("kN/mm"))
+                        Units.of("kN*m/rad"), Units.of("kN/mm"), UnitSystem.SI)
                 : new ReportUnits(Units.of("ft"), Units.of("lb"), Units.of("lb*ft"), Units.of("lb/ft"), Units.of("psi"),
                         Units.of("in"), Units.of("in"), Units.of("in^2"), Units.of("in^3"), Units.of("in^4"),
-                        Units.of("kip*ft/rad"), Units.of("kip/in"));
+                        Units.of("kip*ft/rad"), Units.of("kip/in"), UnitSystem.US);
+    }
+
+    public boolean us() {
+        return system == UnitSystem.US;
     }
 }
