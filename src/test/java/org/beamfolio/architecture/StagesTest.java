@@ -30,10 +30,10 @@ class StagesTest {
     static final Map<String, Set<String>> ALLOWED = Map.ofEntries(
             Map.entry("units", Set.of()),
             Map.entry("catalogue", Set.of("units")),
-            Map.entry("model", Set.of("units", "catalogue")),
+            Map.entry("model", Set.of("units", "catalogue", "loads")),
             Map.entry("section", Set.of("units", "catalogue", "model")),
             Map.entry("combinations", Set.of("units", "model")),
-            Map.entry("loads", Set.of("units", "model")),
+            Map.entry("loads", Set.of("units")),
             Map.entry("job", Set.of("units", "catalogue", "model", "section", "combinations", "loads")),
             Map.entry("analysis", Set.of("units", "catalogue", "model", "section", "combinations", "loads")),
             Map.entry("design", Set.of("units", "catalogue", "model", "section", "analysis")),
