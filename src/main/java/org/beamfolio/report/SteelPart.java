@@ -12,13 +12,11 @@ import org.beamfolio.design.steel.Equation;
 import org.beamfolio.design.steel.LimitStateResult;
 import org.beamfolio.design.steel.Method;
 import org.beamfolio.design.steel.Slenderness;
-import org.beamfolio.design.steel.SteelChecks;
 import org.beamfolio.design.steel.SteelDesignWork;
 import org.beamfolio.design.steel.SteelMember;
 import org.beamfolio.design.steel.Strength;
 import org.beamfolio.design.steel.Value;
 import org.beamfolio.model.Material;
-import org.beamfolio.model.ReportSettings;
 import org.beamfolio.units.Numbers;
 import org.beamfolio.units.Units;
 
@@ -36,7 +34,7 @@ final class SteelPart {
     SteelPart(AnalysisResult result, Texts t) {
         this.result = result;
         this.t = t;
-        this.si = result.job().report().units() == ReportSettings.UnitSystem.SI;
+        this.si = result.job().report().units() == org.beamfolio.units.UnitSystem.SI;
     }
 
     /** The sheet, or null when the job asks for no steel design. */
@@ -48,7 +46,7 @@ final class SteelPart {
         SteelMember m = work.member();
         String method = work.method() == Method.LRFD ? "LRFD (phi Rn)" : "ASD (Rn / Omega)";
         String title = "Steel design: " + m.shape().designation() + " to " + m.edition().label() + ", " + method;
-        List<SteelDesignWork.FlexureRow> segments = SteelChecks.governingPerSegment(work.flexure());
+        List<SteelDesignWork.FlexureRow> segments = work.governingPerSegment();
         SteelDesignWork.FlexureRow governing = segments.stream()
                 .max(Comparator.comparingDouble(SteelDesignWork.FlexureRow::ratio)).orElse(null);
         List<ReportModel.Equation> flexure = new ArrayList<>();

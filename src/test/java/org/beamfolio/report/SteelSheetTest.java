@@ -11,7 +11,7 @@ import org.beamfolio.TestJobs;
 import org.beamfolio.analysis.AnalysisResult;
 import org.beamfolio.checks.Checks;
 import org.beamfolio.design.steel.SteelDesignWork;
-import org.beamfolio.results.CheckOutcome;
+import org.beamfolio.checks.CheckOutcome;
 import org.junit.jupiter.api.Test;
 
 /** The steel design sheet of the example jobs: what it prints, and that it prints the checks' own values. */
@@ -37,7 +37,7 @@ class SteelSheetTest {
         assertFalse(xhtml.contains("Lateral-torsional buckling, local buckling, connections, bearing, web crippling"),
                 "the caution that buckling is not checked is replaced");
         // the sheet's available strength is the flexure check's limit, printed once from one value
-        CheckOutcome flexure = checks.stream().filter(c -> "flexure".equals(c.kind())).findFirst().orElseThrow();
+        CheckOutcome flexure = checks.stream().filter(c -> c.kind() == org.beamfolio.checks.CheckKind.FLEXURE).findFirst().orElseThrow();
         String limit = org.beamfolio.units.Numbers.format(flexure.limit());
         assertTrue(xhtml.contains("(" + limit + " kip·ft available"), "available strength " + limit + " on the sheet:\n"
                 + xhtml.substring(xhtml.indexOf("Available flexural strength")).substring(0, 600));
@@ -52,8 +52,8 @@ class SteelSheetTest {
         var tip = Checks.run(result).stream().filter(c -> c.id().equals("flexure-bottom-18-26ft")).findFirst().orElseThrow();
         assertEquals(1.0, tip.factors().get("Cb"));
         assertEquals("lateral-torsional buckling", tip.limitState());
-        assertEquals(18 * 0.3048, tip.segment().get(0), 1e-12);
-        assertEquals(26 * 0.3048, tip.segment().get(1), 1e-12);
+        assertEquals(18 * 0.3048, tip.segment().from(), 1e-12);
+        assertEquals(26 * 0.3048, tip.segment().to(), 1e-12);
         String xhtml = new PackageRenderer().xhtml(result, Checks.run(result));
         assertTrue(xhtml.contains("(free end)"), "the segment table marks the free end");
         assertTrue(xhtml.contains("F1 (free end unbraced)"), "the Cb step names why it is 1.0");

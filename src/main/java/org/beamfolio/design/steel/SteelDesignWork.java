@@ -52,6 +52,19 @@ public record SteelDesignWork(SteelMember member, Method method, List<FlexureRow
     /** Where a bearing length is given: a support, or the point loads at one position (the least length given there). */
     private record BearingPlace(boolean support, int index, double at, double length, List<Load.Point> loads) {}
 
+    /** Per flange segment (by flange, then along the beam), the combination with the largest ratio; the earlier one on a tie. */
+    public List<FlexureRow> governingPerSegment() {
+        java.util.Map<String, FlexureRow> best = new java.util.LinkedHashMap<>();
+        for (FlexureRow row : flexure) {
+            UnbracedSegments.Segment s = row.segment();
+            best.merge(s.flange() + ":" + s.from() + ":" + s.to(), row, (a, b) -> b.ratio() > a.ratio() ? b : a);
+        }
+        List<FlexureRow> result = new ArrayList<>(best.values());
+        result.sort(java.util.Comparator.comparing((FlexureRow r) -> r.segment().flange())
+                .thenComparingDouble(r -> r.segment().from()));
+        return result;
+    }
+
     /** The design of the job's beam, worked once and kept with the analysis; null without {@code design.steel}. */
     public static SteelDesignWork of(AnalysisResult result) {
         if (result.job().steelDesign() == null) {
