@@ -149,8 +149,10 @@ final class BeamReader {
                     default -> spring(c, s);
                 };
             }
+            YamlNode bearingNode = s.optional("bearing");
+            Double bearing = bearingNode == null ? null : c.positive(bearingNode, s.path("bearing"), Dimension.LENGTH);
             s.rejectUnknown();
-            if (at == null || kind == null) {
+            if (at == null || kind == null || (bearingNode != null && bearing == null)) {
                 ok = false;
                 continue;
             }
@@ -161,7 +163,7 @@ final class BeamReader {
                     ok = false;
                 }
             }
-            result.add(new Support(at, kind, items.get(i).location()));
+            result.add(new Support(at, kind, items.get(i).location(), bearing));
         }
         if (!ok) {
             return null;

@@ -21,6 +21,7 @@ import org.beamfolio.model.Material;
 import org.beamfolio.model.Project;
 import org.beamfolio.model.ReportSettings;
 import org.beamfolio.model.Section;
+import org.beamfolio.model.TimberDesign;
 import org.beamfolio.units.Dimension;
 import org.beamfolio.units.Lengths;
 
@@ -157,7 +158,11 @@ public final class JobReader {
                 context.error(at != null ? at.location() : root.location(), "loads",
                         "the job has no loads: add at least one load (or beam.self_weight) for there to be anything to check");
             }
-            CombinationReader.Outcome combos = CombinationReader.read(context, top, LoadCases.of(loads, beam, beamNode, top.optional("loads")), beam);
+            Defined<String> loadCases = LoadCases.of(loads, beam, beamNode, top.optional("loads"));
+            CombinationReader.Outcome combos = CombinationReader.read(context, top, loadCases, beam);
+            TimberDesign timber = TimberDesignReader.read(context, top.optional("design"), loadCases, materials, sections, beam,
+                    beamNode, combos == null ? null : combos.setName());
+            materials = TimberDesignReader.withAdjustedModulus(materials, timber);
             if (combos != null && combos.stressCheck() && beam != null) {
                 requireAllowables(top, materials, beam);
             }
@@ -166,7 +171,7 @@ public final class JobReader {
                 return null;
             }
             return new Job(name, text, sha256(bytes), project, report, materials, sections, beam, loads, cases,
-                    combos.setName(), combos.combinations(), combos.pattern(), combos.stressCheck(), combos.deflection(), bytes);
+                    combos.setName(), combos.combinations(), combos.pattern(), combos.stressCheck(), combos.deflection(), bytes, timber);
         }
 
         /** A stress check compares with the allowables, so every material on the beam must give them. */
@@ -180,6 +185,13 @@ public final class JobReader {
                 if (m == null) {
                     continue;
                 }
+                YamlNode at = checks instanceof YamlNode.Mapping map && map.entries().containsKey("stress")
+                        ? map.entries().get("stress").value() : checks;
+                if (m.timber() != null) {
+                    context.error(at, "checks.stress", "material \"" + id + "\" is timber: it is checked to the NDS with"
+                            + " design.timber: NDS-2018, not against allowables; set stress: false");
+                    continue;
+                }
                 List<String> missing = new ArrayList<>();
                 if (m.allowableTension() == null) {
                     missing.add("tension");
@@ -191,8 +203,6 @@ public final class JobReader {
                     missing.add("shear");
                 }
                 if (!missing.isEmpty()) {
-                    YamlNode at = checks instanceof YamlNode.Mapping map && map.entries().containsKey("stress")
-                            ? map.entries().get("stress").value() : checks;
                     context.error(at, "checks.stress", "the stress check needs allowable " + String.join(", ", missing)
                             + " stress for material \"" + id + "\" (add materials." + id + ".allowable)");
                 }
@@ -216,6 +226,14 @@ public final class JobReader {
                 String path = "materials." + entry.key();
                 ReadContext.Fields f = context.fields(entry.value(), path);
                 if (f == null) {
+                    continue;
+                }
+                if (f.has("timber")) {
+                    Material timber = TimberMaterialReader.read(context, f, entry.key());
+                    f.rejectUnknown();
+                    if (timber != null) {
+                        result.put(entry.key(), timber);
+                    }
                     continue;
                 }
                 Double e = req(f, "E", Dimension.STRESS);

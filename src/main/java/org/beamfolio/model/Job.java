@@ -9,12 +9,22 @@ import java.util.Map;
  * @param combinationSet the built-in set's name, or null for an explicit list
  * @param combinations the combinations the job states (a built-in set is expanded by the analysis)
  * @param sourceBytes the job file exactly as read, for the package's attachment
+ * @param timber the timber design the job asks for ({@code design.timber}), or null
  */
 public record Job(String name, String sourceText, String sha256, Project project, ReportSettings report,
                   Map<String, Material> materials, Map<String, Section> sections, Beam beam,
                   List<Load> loads, Map<String, String> cases, String combinationSet,
                   List<Combination> combinations, List<String> pattern, boolean stressCheck,
-                  List<DeflectionLimit> deflectionLimits, byte[] sourceBytes) {
+                  List<DeflectionLimit> deflectionLimits, byte[] sourceBytes, TimberDesign timber) {
+    public Job(String name, String sourceText, String sha256, Project project, ReportSettings report,
+               Map<String, Material> materials, Map<String, Section> sections, Beam beam,
+               List<Load> loads, Map<String, String> cases, String combinationSet,
+               List<Combination> combinations, List<String> pattern, boolean stressCheck,
+               List<DeflectionLimit> deflectionLimits, byte[] sourceBytes) {
+        this(name, sourceText, sha256, project, report, materials, sections, beam, loads, cases, combinationSet,
+                combinations, pattern, stressCheck, deflectionLimits, sourceBytes, null);
+    }
+
     public Job {
         sourceBytes = sourceBytes.clone();
         materials = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(materials));
