@@ -21,6 +21,7 @@ public final class Checks {
         for (Check check : checks) {
             outcomes.addAll(check.run(result));
         }
+        outcomes.addAll(org.beamfolio.checks.timber.TimberChecks.run(result));
         return outcomes;
     }
 }
