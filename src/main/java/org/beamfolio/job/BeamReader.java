@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
 import org.beamfolio.model.Beam;
+import org.beamfolio.model.Bracing;
 import org.beamfolio.model.Hinge;
 import org.beamfolio.model.Material;
 import org.beamfolio.model.Section;
@@ -37,6 +38,7 @@ final class BeamReader {
         List<Support> supports = supports(c, f, length);
         List<Hinge> hinges = hinges(c, f, length, supports);
         List<Segment> segments = segments(c, f, length, sections, materials);
+        Bracing bracing = bracing(c, f, length);
         YamlNode sw = f.optional("self_weight");
         String selfWeight = sw == null ? null : c.id(sw, f.path("self_weight"));
         if (selfWeight != null && section != null && material != null) {
@@ -52,10 +54,11 @@ final class BeamReader {
             }
         }
         f.rejectUnknown();
-        if (length == null || section == null || material == null || supports == null || hinges == null || segments == null) {
+        if (length == null || section == null || material == null || supports == null || hinges == null || segments == null
+                || bracing == null) {
             return null;
         }
-        return new Beam(length, section, material, supports, hinges, segments, selfWeight);
+        return new Beam(length, section, material, supports, hinges, segments, selfWeight, bracing);
     }
 
     private static List<String> usedSections(String section, List<Segment> segments) {
@@ -170,6 +173,53 @@ final class BeamReader {
         }
         result.sort(Comparator.comparingDouble(Support::at));
         return result;
+    }
+
+    /** {@code bracing: { top: continuous | supports | [points], bottom: ... }}; absent: both at the supports. */
+    private static Bracing bracing(ReadContext c, ReadContext.Fields f, Double length) {
+        YamlNode node = f.optional("bracing");
+        if (node == null) {
+            return Bracing.AT_SUPPORTS;
+        }
+        ReadContext.Fields b = c.fields(node, f.path("bracing"));
+        if (b == null) {
+            return null;
+        }
+        Bracing.Lateral top = lateral(c, b, "top", length);
+        Bracing.Lateral bottom = lateral(c, b, "bottom", length);
+        b.rejectUnknown();
+        return top == null || bottom == null ? null : new Bracing(top, bottom);
+    }
+
+    private static Bracing.Lateral lateral(ReadContext c, ReadContext.Fields b, String key, Double length) {
+        YamlNode node = b.optional(key);
+        if (node == null) {
+            return Bracing.Lateral.AT_SUPPORTS;
+        }
+        String path = b.path(key);
+        if (node instanceof YamlNode.Scalar) {
+            String kind = c.choice(node, path, List.of("continuous", "supports"));
+            return kind == null ? null : kind.equals("continuous") ? Bracing.Lateral.CONTINUOUS : Bracing.Lateral.AT_SUPPORTS;
+        }
+        List<YamlNode> items = c.list(node, path).orElse(null);
+        if (items == null) {
+            return null;
+        }
+        List<Double> points = new ArrayList<>();
+        boolean ok = true;
+        for (int i = 0; i < items.size(); i++) {
+            Double x = position(c, items.get(i), path + "[" + i + "]", length);
+            if (x == null) {
+                ok = false;
+            } else {
+                points.add(x);
+            }
+        }
+        if (!ok || length == null) {
+            return null;
+        }
+        points.sort(Comparator.naturalOrder());
+        return new Bracing.Lateral(false, points);
     }
 
     private static SupportKind spring(ReadContext c, ReadContext.Fields s) {

@@ -14,6 +14,7 @@ import java.util.HexFormat;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import org.beamfolio.catalogue.SteelGrade;
 import org.beamfolio.model.Beam;
 import org.beamfolio.model.Job;
 import org.beamfolio.model.Load;
@@ -236,8 +237,23 @@ public final class JobReader {
                     }
                     continue;
                 }
-                Double e = req(f, "E", Dimension.STRESS);
+                YamlNode gradeNode = f.optional("grade");
+                SteelGrade grade = gradeNode == null ? null : CatalogueSections.grade(context, gradeNode, f.path("grade"));
+                if (gradeNode != null && grade == null) {
+                    f.rejectUnknown("E", "density", "allowable", "source", "Fy", "Fu");
+                    continue;
+                }
+                Double e = grade == null ? req(f, "E", Dimension.STRESS) : opt(f, "E", Dimension.STRESS);
                 Double density = opt(f, "density", Dimension.WEIGHT_DENSITY);
+                Double fy = opt(f, "Fy", Dimension.STRESS);
+                Double fu = opt(f, "Fu", Dimension.STRESS);
+                if (grade != null) {
+                    e = e == null ? grade.elasticModulus() : e;
+                    density = density == null ? grade.weightDensity() : density;
+                }
+                if (fy != null && fu != null && fu < fy) {
+                    context.error(f.optional("Fu"), f.path("Fu"), "Fu must not be less than Fy");
+                }
                 Double tension = null;
                 Double compression = null;
                 Double shear = null;
@@ -252,11 +268,12 @@ public final class JobReader {
                     }
                 }
                 YamlNode source = f.optional("source");
-                String sourceText = source == null ? "" : context.text(source, f.path("source"));
+                String sourceText = source == null ? (grade == null ? "" : grade.standard())
+                        : context.text(source, f.path("source"));
                 f.rejectUnknown();
                 if (e != null) {
                     result.put(entry.key(), new Material(entry.key(), e, density, tension, compression, shear,
-                            sourceText == null ? "" : sourceText));
+                            sourceText == null ? "" : sourceText, grade == null ? null : grade.label(), fy, fu));
                 }
             }
             return result;

@@ -47,13 +47,19 @@ final class SectionReader {
             f.rejectUnknown();
             return lumber;
         }
-        YamlNode shapeNode = f.required("shape");
         boolean flip = false;
         YamlNode flipNode = f.optional("flip");
         if (flipNode != null) {
             Boolean value = context.bool(flipNode, f.path("flip"));
             flip = value != null && value;
         }
+        YamlNode designation = f.optional("designation");
+        if (designation != null) {
+            SectionShape catalogued = CatalogueSections.read(context, designation, f.path("designation"));
+            f.rejectUnknown();
+            return catalogued == null ? null : new Section(id, catalogued, flip);
+        }
+        YamlNode shapeNode = f.required("shape");
         if (shapeNode == null) {
             f.rejectUnknown("b", "h", "d", "t", "bf", "tf", "tw", "plates", "I", "depth", "y_bottom", "A", "Q");
             return null;

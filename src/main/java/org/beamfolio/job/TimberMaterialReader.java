@@ -87,7 +87,7 @@ final class TimberMaterialReader {
         }
         TimberValues values = new TimberValues(kind, fb, fbNeg, fv, fcPerp, e, eMin, size, x,
                 sourceText == null ? "" : sourceText);
-        return new Material(id, e, density, null, null, null, values.source(), values);
+        return Material.timber(id, density, values);
     }
 
     private static Double stress(ReadContext c, ReadContext.Fields f, String key) {

@@ -2,9 +2,9 @@ package org.beamfolio.model;
 
 import java.util.List;
 
-/** The member: length, default section and material, supports, hinges and segments (SI). */
+/** The member: length, default section and material, supports, hinges, segments and lateral bracing (SI). */
 public record Beam(double length, String section, String material, List<Support> supports,
-                   List<Hinge> hinges, List<Segment> segments, String selfWeightCase) {
+                   List<Hinge> hinges, List<Segment> segments, String selfWeightCase, Bracing bracing) {
     public Beam {
         if (!(length > 0)) {
             throw new IllegalArgumentException("beam length must be positive");
@@ -12,6 +12,13 @@ public record Beam(double length, String section, String material, List<Support>
         supports = List.copyOf(supports);
         hinges = List.copyOf(hinges);
         segments = List.copyOf(segments);
+        bracing = bracing == null ? Bracing.AT_SUPPORTS : bracing;
+    }
+
+    /** A beam braced at its supports only. */
+    public Beam(double length, String section, String material, List<Support> supports,
+                List<Hinge> hinges, List<Segment> segments, String selfWeightCase) {
+        this(length, section, material, supports, hinges, segments, selfWeightCase, Bracing.AT_SUPPORTS);
     }
 
     /**

@@ -2,7 +2,7 @@ package org.beamfolio.model;
 
 import java.util.List;
 
-/** The cross-section shapes of format 1; lengths in metres. */
+/** The cross-section shapes of format 1 and catalogue shapes; lengths in metres. */
 public sealed interface SectionShape {
     record Rectangle(double b, double h) implements SectionShape {}
 
@@ -26,6 +26,9 @@ public sealed interface SectionShape {
     }
 
     record Plate(double b, double h, double y) {}
+
+    /** A shape named from the catalogue: its tabulated properties are used, not computed. */
+    record Catalogued(org.beamfolio.catalogue.Shape shape) implements SectionShape {}
 
     /** Properties given by the engineer; optional ones are null. */
     record Given(double I, double depth, double yBottom, Double A, Double Q, Double t) implements SectionShape {}

@@ -27,6 +27,9 @@ public final class SectionCalculator {
         if (shape instanceof SectionShape.Given g) {
             return given(g, section.flip());
         }
+        if (shape instanceof SectionShape.Catalogued c) {
+            return CataloguedProperties.of(c.shape(), section.flip());
+        }
         return fromRects(rects(shape), section.flip());
     }
 

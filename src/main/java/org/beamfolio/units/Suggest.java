@@ -24,7 +24,7 @@ public final class Suggest {
     }
 
     /** Optimal string alignment distance (Levenshtein with adjacent transpositions). */
-    static int distance(String a, String b) {
+    public static int distance(String a, String b) {
         int[][] d = new int[a.length() + 1][b.length() + 1];
         for (int i = 0; i <= a.length(); i++) {
             d[i][0] = i;

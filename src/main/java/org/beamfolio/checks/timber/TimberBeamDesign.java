@@ -251,7 +251,7 @@ public final class TimberBeamDesign {
             double length = result.job().beam().length();
             for (int i = 0; i < supports.size(); i++) {
                 Support s = supports.get(i);
-                if (s.bearing() == null) {
+                if (s.bearingLength() == null) {
                     continue;
                 }
                 double reaction = 0;
@@ -265,11 +265,11 @@ public final class TimberBeamDesign {
                 }
                 int e = model.elementAt(Math.min(Math.max(s.at(), 1e-9 * length), length * (1 - 1e-9)));
                 SectionShape.Rectangle r = rectangle(e);
-                double toEnd = Math.min(s.at(), length - s.at()) - s.bearing() / 2;
+                double toEnd = Math.min(s.at(), length - s.at()) - s.bearingLength() / 2;
                 boolean nearEnd = toEnd < 3 * 0.0254 - 1e-9;
-                AdjustedValues.Adjusted fc = adjusted(e).bearing(s.bearing(), nearEnd);
-                out.add(new TimberDesignResult.Bearing(i + 1, s.at(), reaction, under, r.b(), s.bearing(),
-                        reaction / (r.b() * s.bearing()), fc));
+                AdjustedValues.Adjusted fc = adjusted(e).bearing(s.bearingLength(), nearEnd);
+                out.add(new TimberDesignResult.Bearing(i + 1, s.at(), reaction, under, r.b(), s.bearingLength(),
+                        reaction / (r.b() * s.bearingLength()), fc));
             }
             return out;
         }

@@ -1,0 +1,23 @@
+package org.beamfolio.design.steel;
+
+import static org.beamfolio.catalogue.ShapeProperty.ZX;
+
+/** Yielding of doubly symmetric compact I-shapes and channels: Mn = Mp = Fy Zx, AISC 360 F2.1, Eq. F2-1. */
+public final class F2Yielding implements FlexuralLimitState {
+    @Override
+    public String name() {
+        return "yielding";
+    }
+
+    @Override
+    public Clause clause(Edition edition) {
+        return Clause.of(edition, "F2.1", "F2-1");
+    }
+
+    @Override
+    public LimitStateResult evaluate(SteelMember m, FlexureCase bending) {
+        Work w = new Work().given("Fy", m.fy(), Kind.STRESS).given("Zx", m.shape().get(ZX), Kind.MODULUS);
+        double mn = w.eq("F2-1", "Mn", Kind.MOMENT, "{Fy} * {Zx}");
+        return LimitStateResult.governs(name(), clause(m.edition()), mn, w, "Mn = Mp");
+    }
+}
