@@ -42,8 +42,8 @@ public final class TimberBeamDesign {
 
     private static final Map<AnalysisResult, TimberDesignResult> FOUND = Collections.synchronizedMap(new WeakHashMap<>());
 
-    /** The bracing of the compression edge; the job format's default until the beam states its own. */
-    private static volatile UnbracedSegments bracing = UnbracedSegments.SUPPORTS_ONLY;
+    /** The bracing of the compression edge: the beam's own ({@code beam.bracing}). */
+    private static final UnbracedSegments BRACING = UnbracedSegments.BY_BRACING;
 
     /** The design of a job with {@code design.timber}, or null for any other job. */
     public static TimberDesignResult of(AnalysisResult result) {
@@ -52,7 +52,7 @@ public final class TimberBeamDesign {
         }
         TimberDesignResult found = FOUND.get(result);
         if (found == null) {
-            found = new Run(result, bracing).design();
+            found = new Run(result, BRACING).design();
             FOUND.put(result, found);
         }
         return found;

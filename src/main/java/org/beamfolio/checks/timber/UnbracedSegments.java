@@ -30,17 +30,44 @@ public interface UnbracedSegments {
     }
 
     /**
-     * The job format's default: both edges held laterally at the supports only, so each span and
-     * each overhang is one unbraced length of whichever edge is in compression.
+     * The beam's own bracing ({@code beam.bracing}; without it, both edges at the supports only):
+     * the edge in compression is cut at the beam's ends, the supports and its bracing points; an
+     * edge braced continuously has no unbraced length. A segment touching a free end that no
+     * support or point braces is a cantilever's.
      */
-    UnbracedSegments SUPPORTS_ONLY = (result, combination, topInCompression) -> {
+    UnbracedSegments BY_BRACING = (result, combination, topInCompression) -> {
+        org.beamfolio.model.Beam beam = result.job().beam();
+        org.beamfolio.model.Bracing.Flange edge = topInCompression
+                ? org.beamfolio.model.Bracing.Flange.TOP : org.beamfolio.model.Bracing.Flange.BOTTOM;
+        org.beamfolio.model.Bracing.Lateral lateral = beam.bracing().of(edge);
+        List<Double> cuts = org.beamfolio.analysis.UnbracedSegments.cuts(beam, edge);
         List<Unbraced> out = new ArrayList<>();
-        List<AnalysisResult.Span> spans = result.spans();
-        for (int i = 0; i < spans.size(); i++) {
-            AnalysisResult.Span s = spans.get(i);
-            out.add(new Unbraced(s.from(), s.to(), i, !s.label().startsWith("span "), false,
-                    "braced at the supports only (no beam.bracing)"));
+        for (int k = 0; k + 1 < cuts.size(); k++) {
+            double from = cuts.get(k);
+            double to = cuts.get(k + 1);
+            boolean free = !lateral.continuous() && (isFree(beam, from) || isFree(beam, to));
+            String by = lateral.continuous() ? "braced continuously (beam.bracing." + edge.label() + ")"
+                    : lateral.points().isEmpty() ? "braced at the supports" + (free ? " (free end unbraced)" : "")
+                    : "braced at the supports and the bracing points of beam.bracing." + edge.label();
+            out.add(new Unbraced(from, to, regionOf(result, (from + to) / 2), free, lateral.continuous(), by));
         }
         return out;
     };
+
+    private static boolean isFree(org.beamfolio.model.Beam beam, double x) {
+        double same = 1e-9 * beam.length();
+        boolean end = x <= same || x >= beam.length() - same;
+        return end && beam.supports().stream().noneMatch(s -> Math.abs(s.at() - x) <= same);
+    }
+
+    /** The region (span or overhang) holding x, for the pattern arrangements' loaded regions. */
+    private static int regionOf(AnalysisResult result, double x) {
+        List<AnalysisResult.Span> spans = result.spans();
+        for (int i = 0; i < spans.size(); i++) {
+            if (x >= spans.get(i).from() && x <= spans.get(i).to()) {
+                return i;
+            }
+        }
+        return spans.size() - 1;
+    }
 }
