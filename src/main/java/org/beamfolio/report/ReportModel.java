@@ -9,7 +9,7 @@ import java.util.List;
  */
 public record ReportModel(Sheet sheet, Cover cover, Revision revision, Basis basis, Loading loading, List<CombinationSheet> analyses,
                           Envelope envelope, Reactions reactions, Stresses stresses, Checks checks, List<String> cautions,
-                          List<String> reviewChecklist, List<List<String>> history, Appendix appendix) {
+                          List<String> reviewChecklist, List<List<String>> history, Appendix appendix, Timber timber) {
 
     /** The title block on every sheet. */
     public record Sheet(String title, String number, String subject, String revision, String preparedBy, String date,
@@ -60,6 +60,13 @@ public record ReportModel(Sheet sheet, Cover cover, Revision revision, Basis bas
 
     /** What changed since the previous revision; null without {@code --previous}. */
     public record Revision(String revisions, Table inputs, Table results, Table checks) {}
+
+    /**
+     * The timber design sheet (null without {@code design.timber}): basis, reference values and
+     * source, the governing bending check's factors and Fb' worked, and every combination's checks.
+     */
+    public record Timber(List<String> basis, Table reference, String source, Table factors, List<Equation> fbPrime,
+                         Table bending, Table shear, Table bearing, Table longTerm, String creep) {}
 
     public record Appendix(List<Row> lines, String digest, String toolVersion, String attachment) {}
 }

@@ -58,7 +58,8 @@ final class ReportModelBuilder {
         ReportModel.Revision revision = previous == null ? null
                 : new RevisionPart(result, checks, previous, previousChecks, t).build();
         ReportModel model = new ReportModel(sheet, cover(checks, analyses, revision != null), revision, basis(), loading.build(), analyses, envelope,
-                new ReactionsPart(result, t).build(), stresses, checks(checks), cautions(), reviewChecklist(), history(), appendix());
+                new ReactionsPart(result, t).build(), stresses, checks(checks), cautions(), reviewChecklist(), history(), appendix(),
+                new TimberPart(result, t).build());
         return new Built(model, drawings);
     }
 
@@ -113,6 +114,9 @@ final class ReportModelBuilder {
         contents.add(new ReportModel.Row("Envelope over all combinations", "envelope"));
         contents.add(new ReportModel.Row("Reactions for the supporting structure", "reactions"));
         contents.add(new ReportModel.Row("Section properties and stresses", "stresses"));
+        if (result.job().timber() != null) {
+            contents.add(new ReportModel.Row("Timber design to the NDS", "timber"));
+        }
         contents.add(new ReportModel.Row("Checks and summary", "checks"));
         contents.add(new ReportModel.Row("Cautions", "cautions"));
         contents.add(new ReportModel.Row("Reviewer sign-off", "review"));
