@@ -152,14 +152,17 @@ public final class JobReader {
             Map<String, Section> sections = SectionReader.readAll(context, sectionsNode);
             YamlNode beamNode = top.required("beam");
             Beam beam = BeamReader.read(context, beamNode, Defined.keysOf(materialsNode, materials), Defined.keysOf(sectionsNode, sections));
-            List<Load> loads = LoadReader.readAll(context, top.optional("loads"), beam);
+            Defined<org.beamfolio.loads.AreaLoad> areaLoads = AreaLoadReader.readAll(context, top.optional("area_loads"));
+            org.beamfolio.loads.ReductionSettings reductions = DesignReader.reductions(context, top.optional("design"));
+            LoadReader.Read read = LoadReader.readAll(context, top.optional("loads"), beam, areaLoads, reductions);
+            List<Load> loads = read.loads();
             Map<String, String> cases = cases(top.optional("cases"));
             if (loads.isEmpty() && (beam == null || beam.selfWeightCase() == null) && context.diagnostics().isEmpty()) {
                 YamlNode at = top.optional("loads");
                 context.error(at != null ? at.location() : root.location(), "loads",
                         "the job has no loads: add at least one load (or beam.self_weight) for there to be anything to check");
             }
-            Defined<String> loadCases = LoadCases.of(loads, beam, beamNode, top.optional("loads"));
+            Defined<String> loadCases = LoadCases.of(loads, beam, beamNode, top.optional("loads"), areaLoads);
             CombinationReader.Outcome combos = CombinationReader.read(context, top, loadCases, beam);
             TimberDesign timber = TimberDesignReader.read(context, top.optional("design"), loadCases, materials, sections, beam,
                     beamNode, combos == null ? null : combos.setName());
@@ -172,7 +175,7 @@ public final class JobReader {
                 return null;
             }
             return new Job(name, text, sha256(bytes), project, report, materials, sections, beam, loads, cases,
-                    combos.setName(), combos.combinations(), combos.pattern(), combos.stressCheck(), combos.deflection(), bytes, timber);
+                    combos.setName(), combos.combinations(), combos.pattern(), combos.stressCheck(), combos.deflection(), bytes, read.takeOff(), timber);
         }
 
         /** A stress check compares with the allowables, so every material on the beam must give them. */

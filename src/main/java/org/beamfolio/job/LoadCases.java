@@ -17,7 +17,8 @@ import org.beamfolio.model.Load;
 final class LoadCases {
     private LoadCases() {}
 
-    static Defined<String> of(List<Load> loads, Beam beam, YamlNode beamNode, YamlNode loadsNode) {
+    static Defined<String> of(List<Load> loads, Beam beam, YamlNode beamNode, YamlNode loadsNode,
+                              Defined<org.beamfolio.loads.AreaLoad> areaLoads) {
         Map<String, String> used = new LinkedHashMap<>();
         loads.forEach(l -> used.put(l.loadCase(), l.loadCase()));
         if (beam != null && beam.selfWeightCase() != null) {
@@ -28,12 +29,27 @@ final class LoadCases {
         boolean complete = beamNode instanceof YamlNode.Mapping m && caseOf(m, "self_weight", named, true);
         if (loadsNode instanceof YamlNode.Sequence s) {
             for (YamlNode item : s.items()) {
-                complete &= item instanceof YamlNode.Mapping m && caseOf(m, "case", named, false);
+                complete &= item instanceof YamlNode.Mapping m && (isArea(m) ? areaCases(m, areaLoads, named) : caseOf(m, "case", named, false));
             }
         } else if (loadsNode != null) {
             complete = false;
         }
         return new Defined<>(used, named, complete);
+    }
+
+    private static boolean isArea(YamlNode.Mapping m) {
+        YamlNode.Entry type = m.entries().get("type");
+        return type != null && type.value() instanceof YamlNode.Scalar s && s.text().strip().equalsIgnoreCase("area");
+    }
+
+    /** Adds the cases of the area load an application names; false when that area load did not read. */
+    private static boolean areaCases(YamlNode.Mapping m, Defined<org.beamfolio.loads.AreaLoad> areaLoads, Set<String> named) {
+        YamlNode.Entry load = m.entries().get("load");
+        if (load != null && load.value() instanceof YamlNode.Scalar s && areaLoads.has(s.text().strip())) {
+            named.addAll(areaLoads.get(s.text().strip()).pressures().keySet());
+            return true;
+        }
+        return false;
     }
 
     /** Adds the case a mapping names under key; false when it names one that cannot be read. */

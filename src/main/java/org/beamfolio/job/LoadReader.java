@@ -2,48 +2,99 @@ package org.beamfolio.job;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.beamfolio.loads.AreaLoad;
+import org.beamfolio.loads.ReductionSettings;
+import org.beamfolio.loads.TakeOff;
+import org.beamfolio.loads.Tributary;
 import org.beamfolio.model.Beam;
 import org.beamfolio.model.Load;
 import org.beamfolio.units.Dimension;
 
-/** Reads the loads: point forces, couples, uniform and linearly varying line loads. */
+/**
+ * Reads the loads: point forces, couples, uniform and linearly varying line loads, and area loads
+ * over a tributary width, which the take-off turns into line loads (reduced where the job asks).
+ */
 final class LoadReader {
     static final int MAX_LOADS = 20000;
 
     private LoadReader() {}
 
-    static List<Load> readAll(ReadContext c, YamlNode node, Beam beam) {
+    /** The member's loads in the order written (an area load's line loads where it stood), and their take-off. */
+    record Read(List<Load> loads, TakeOff takeOff) {}
+
+    /** One entry of the list: a load, or an area load on a width still to be taken off. */
+    private record Entry(Load load, Tributary tributary, Location where) {}
+
+    static Read readAll(ReadContext c, YamlNode node, Beam beam, Defined<AreaLoad> areaLoads, ReductionSettings reductions) {
         List<Load> result = new ArrayList<>();
         List<YamlNode> items = JobReader.listOrEmpty(c, node, "loads");
         if (items == null) {
-            return result;
+            return new Read(result, TakeOff.EMPTY);
         }
         if (items.size() > MAX_LOADS) {
             c.error(node, "loads", "too many loads: " + items.size() + " (at most " + MAX_LOADS + ")");
-            return result;
+            return new Read(result, TakeOff.EMPTY);
         }
         Double length = beam == null ? null : beam.length();
+        List<Entry> entries = new ArrayList<>();
         for (int i = 0; i < items.size(); i++) {
-            Load load = read(c, items.get(i), "loads[" + i + "]", length);
-            if (load != null) {
-                result.add(load);
+            Entry entry = read(c, items.get(i), "loads[" + i + "]", length, areaLoads);
+            if (entry != null) {
+                entries.add(entry);
             }
         }
-        return result;
+        List<Tributary> tributaries = entries.stream().map(Entry::tributary).filter(java.util.Objects::nonNull).toList();
+        TakeOff takeOff = reductions == null ? TakeOff.EMPTY : TakeOff.of(tributaries, reductions);
+        int application = -1;
+        for (Entry e : entries) {
+            if (e.load() != null) {
+                result.add(e.load());
+                continue;
+            }
+            application++;
+            for (TakeOff.Line line : takeOff.lines()) {
+                if (line.application() == application) { // the take-off numbers applications in the same order
+                    result.add(new Load.Distributed(line.loadCase(), line.wStart(), line.wEnd(), e.tributary().from(),
+                            e.tributary().to(), !e.tributary().varying(), noteOf(e.tributary()), e.where()));
+                }
+            }
+        }
+        return new Read(result, takeOff);
     }
 
-    private static Load read(ReadContext c, YamlNode node, String path, Double length) {
+    /** The note a line load from an area load carries: where it came from, and the engineer's words. */
+    private static String noteOf(Tributary t) {
+        StringBuilder note = new StringBuilder("area load ").append(t.load().name());
+        for (String words : List.of(t.load().note(), t.note())) {
+            if (!words.isBlank()) {
+                note.append(note.indexOf(":") < 0 ? ": " : "; ").append(words);
+            }
+        }
+        return note.toString();
+    }
+
+    private static Entry read(ReadContext c, YamlNode node, String path, Double length, Defined<AreaLoad> areaLoads) {
         ReadContext.Fields f = c.fields(node, path);
         if (f == null) {
             return null;
+        }
+        YamlNode typeNode = f.required("type");
+        String type = typeNode == null ? null : c.choice(typeNode, f.path("type"), List.of("point", "moment", "uniform", "linear", "area"));
+        if ("area".equals(type)) {
+            return area(c, f, length, areaLoads);
         }
         YamlNode caseNode = f.required("case");
         String loadCase = caseNode == null ? null : c.id(caseNode, f.path("case"));
         YamlNode noteNode = f.optional("note");
         String note = noteNode == null ? "" : c.text(noteNode, f.path("note"));
-        YamlNode typeNode = f.required("type");
-        String type = typeNode == null ? null : c.choice(typeNode, f.path("type"), List.of("point", "moment", "uniform", "linear"));
         if (type == null) {
+            f.rejectUnknown("P", "M", "w", "at", "from", "to", "sense", "load", "width");
+            return null;
+        }
+        if (f.has("width") || f.has("load")) {
+            // the engineer meant an area load: say how to write one, not what is wrong with w
+            c.error(f.node(), f.path("type"), "a tributary width belongs to an area load: write type: area, load: <a name under"
+                    + " area_loads, which holds the pressure>, width: ...; or give the line load w without a width");
             f.rejectUnknown("P", "M", "w", "at", "from", "to", "sense");
             return null;
         }
@@ -54,7 +105,55 @@ final class LoadReader {
             default -> linear(c, f, loadCase, note, length, node.location());
         };
         f.rejectUnknown();
-        return loadCase == null || note == null ? null : load;
+        return loadCase == null || note == null || load == null ? null : new Entry(load, null, node.location());
+    }
+
+    /** An area load over a tributary width, constant or varying linearly over from..to (default the whole beam). */
+    private static Entry area(ReadContext c, ReadContext.Fields f, Double length, Defined<AreaLoad> areaLoads) {
+        if (f.has("case")) {
+            c.error(f.node().entries().get("case").keyLocation(), f.path("case"), "an area load takes its cases from its"
+                    + " entry under area_loads: leave case out here");
+        }
+        if (f.has("w")) {
+            c.error(f.node().entries().get("w").keyLocation(), f.path("w"), "an area load's pressure is given under area_loads"
+                    + " and multiplied by the width here: leave w out, or use type: uniform for a line load");
+        }
+        String name = BeamReader.reference(c, f, "load", areaLoads, "area_loads", true);
+        YamlNode noteNode = f.optional("note");
+        String note = noteNode == null ? "" : c.text(noteNode, f.path("note"));
+        Double[] widths = widths(c, f);
+        Double[] range = range(c, f, length, false);
+        f.rejectUnknown("case", "w");
+        if (name == null || note == null || widths == null || range == null || f.has("case") || f.has("w")) {
+            return null;
+        }
+        return new Entry(null, new Tributary(areaLoads.get(name), widths[0], widths[1], range[0], range[1], note), f.node().location());
+    }
+
+    /** width: one length, or [start, end] varying linearly; never negative, not zero throughout. */
+    private static Double[] widths(ReadContext c, ReadContext.Fields f) {
+        YamlNode node = f.required("width");
+        if (node == null) {
+            return null;
+        }
+        if (node instanceof YamlNode.Sequence s) {
+            if (s.items().size() != 2) {
+                c.error(node, f.path("width"), "a varying tributary width needs two widths, [start, end]; got " + s.items().size());
+                return null;
+            }
+            Double start = c.quantity(s.items().get(0), f.path("width") + "[0]", Dimension.LENGTH);
+            Double end = c.quantity(s.items().get(1), f.path("width") + "[1]", Dimension.LENGTH);
+            if (start == null || end == null) {
+                return null;
+            }
+            if (start < 0 || end < 0 || start + end == 0) {
+                c.error(node, f.path("width"), "tributary widths must not be negative, nor both zero");
+                return null;
+            }
+            return new Double[] {start, end};
+        }
+        Double width = c.positive(node, f.path("width"), Dimension.LENGTH);
+        return width == null ? null : new Double[] {width, width};
     }
 
     private static Double at(ReadContext c, ReadContext.Fields f, Double length) {
@@ -83,7 +182,7 @@ final class LoadReader {
 
     private static Load uniform(ReadContext c, ReadContext.Fields f, String loadCase, String note, Double length, Location where) {
         YamlNode wNode = f.required("w");
-        Double w = wNode == null ? null : c.quantity(wNode, f.path("w"), Dimension.FORCE_PER_LENGTH);
+        Double w = wNode == null ? null : c.lineLoad(wNode, f.path("w"));
         Double[] range = range(c, f, length, false);
         if (w == null || range == null) {
             return null;
@@ -100,8 +199,8 @@ final class LoadReader {
             if (ends != null && ends.size() != 2) {
                 c.error(wNode, f.path("w"), "a linear load needs two intensities, [start, end]; got " + ends.size());
             } else if (ends != null) {
-                start = c.quantity(ends.get(0), f.path("w") + "[0]", Dimension.FORCE_PER_LENGTH);
-                end = c.quantity(ends.get(1), f.path("w") + "[1]", Dimension.FORCE_PER_LENGTH);
+                start = c.lineLoad(ends.get(0), f.path("w") + "[0]");
+                end = c.lineLoad(ends.get(1), f.path("w") + "[1]");
             }
         }
         Double[] range = range(c, f, length, true);

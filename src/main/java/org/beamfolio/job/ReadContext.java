@@ -137,6 +137,31 @@ final class ReadContext {
         return result.si();
     }
 
+    /**
+     * A line load; a pressure written where a line load belongs gets the way forward, since the
+     * engineer's number is right and only the take-off is missing.
+     */
+    Double lineLoad(YamlNode node, String path) {
+        if (node instanceof YamlNode.Scalar s && s.kind() == YamlNode.Scalar.Kind.STRING
+                && QuantityParser.parse(s.text(), Dimension.STRESS).ok()) {
+            error(node, path, "\"" + s.text().strip() + "\" is a pressure, not a line load: use type: area with a width"
+                    + " (and the pressure under area_loads), or multiply by a tributary width");
+            return null;
+        }
+        return quantity(node, path, Dimension.FORCE_PER_LENGTH);
+    }
+
+    /** A pressure (an area load); a line load written where a pressure belongs gets the way forward. */
+    Double pressure(YamlNode node, String path) {
+        if (node instanceof YamlNode.Scalar s && s.kind() == YamlNode.Scalar.Kind.STRING
+                && QuantityParser.parse(s.text(), Dimension.FORCE_PER_LENGTH).ok()) {
+            error(node, path, "\"" + s.text().strip() + "\" is a line load, not a pressure: divide by the tributary width"
+                    + " to give a pressure (psf, ksf, Pa, kPa), or put it under loads with type: uniform");
+            return null;
+        }
+        return quantity(node, path, Dimension.STRESS);
+    }
+
     /** A quantity that must be greater than zero. */
     Double positive(YamlNode node, String path, Dimension dimension) {
         Double value = quantity(node, path, dimension);

@@ -35,18 +35,14 @@ final class TimberDesignReader {
     /** The timber design, or null when the job asks for none or something is wrong (then with its message). */
     static TimberDesign read(ReadContext c, YamlNode designNode, Defined<String> cases, Map<String, Material> materials,
                              Map<String, Section> sections, Beam beam, YamlNode beamNode, String setName) {
-        if (designNode == null) {
-            return null;
+        if (!(designNode instanceof YamlNode.Mapping)) {
+            return null; // absent, or not a mapping: DesignReader reports that, and the design block's unknown keys
         }
         ReadContext.Fields f = c.fields(designNode, "design");
-        if (f == null) {
-            return null;
-        }
         YamlNode timberNode = f.optional("timber");
         YamlNode methodNode = f.optional("method");
         YamlNode serviceNode = f.optional("timber_service");
         YamlNode durationsNode = f.optional("durations");
-        f.rejectUnknown();
         String method = methodNode == null ? null : c.choice(methodNode, f.path("method"), METHODS);
         if (timberNode == null) {
             for (YamlNode n : new YamlNode[] {serviceNode, durationsNode}) {

@@ -9,23 +9,38 @@ import java.util.Map;
  * @param combinationSet the built-in set's name, or null for an explicit list
  * @param combinations the combinations the job states (a built-in set is expanded by the analysis)
  * @param sourceBytes the job file exactly as read, for the package's attachment
+ * @param takeOff where the line loads that came from area loads came from, and the live load
+ *        reductions taken (those line loads are already in {@code loads}, reduced)
  * @param timber the timber design the job asks for ({@code design.timber}), or null
  */
 public record Job(String name, String sourceText, String sha256, Project project, ReportSettings report,
                   Map<String, Material> materials, Map<String, Section> sections, Beam beam,
                   List<Load> loads, Map<String, String> cases, String combinationSet,
                   List<Combination> combinations, List<String> pattern, boolean stressCheck,
-                  List<DeflectionLimit> deflectionLimits, byte[] sourceBytes, TimberDesign timber) {
+                  List<DeflectionLimit> deflectionLimits, byte[] sourceBytes,
+                  org.beamfolio.loads.TakeOff takeOff, TimberDesign timber) {
+    /** A job of line loads only, without timber design. */
     public Job(String name, String sourceText, String sha256, Project project, ReportSettings report,
                Map<String, Material> materials, Map<String, Section> sections, Beam beam,
                List<Load> loads, Map<String, String> cases, String combinationSet,
                List<Combination> combinations, List<String> pattern, boolean stressCheck,
                List<DeflectionLimit> deflectionLimits, byte[] sourceBytes) {
         this(name, sourceText, sha256, project, report, materials, sections, beam, loads, cases, combinationSet,
-                combinations, pattern, stressCheck, deflectionLimits, sourceBytes, null);
+                combinations, pattern, stressCheck, deflectionLimits, sourceBytes, org.beamfolio.loads.TakeOff.EMPTY);
+    }
+
+    /** A job without timber design. */
+    public Job(String name, String sourceText, String sha256, Project project, ReportSettings report,
+               Map<String, Material> materials, Map<String, Section> sections, Beam beam,
+               List<Load> loads, Map<String, String> cases, String combinationSet,
+               List<Combination> combinations, List<String> pattern, boolean stressCheck,
+               List<DeflectionLimit> deflectionLimits, byte[] sourceBytes, org.beamfolio.loads.TakeOff takeOff) {
+        this(name, sourceText, sha256, project, report, materials, sections, beam, loads, cases, combinationSet,
+                combinations, pattern, stressCheck, deflectionLimits, sourceBytes, takeOff, null);
     }
 
     public Job {
+        java.util.Objects.requireNonNull(takeOff, "takeOff");
         sourceBytes = sourceBytes.clone();
         materials = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(materials));
         sections = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(sections));

@@ -9,7 +9,8 @@ import java.util.List;
  */
 public record ReportModel(Sheet sheet, Cover cover, Revision revision, Basis basis, Loading loading, List<CombinationSheet> analyses,
                           Envelope envelope, Reactions reactions, Stresses stresses, Checks checks, List<String> cautions,
-                          List<String> reviewChecklist, List<List<String>> history, Appendix appendix, Timber timber) {
+                          List<String> reviewChecklist, List<List<String>> history, Appendix appendix, AreaLoads areaLoads,
+                          Timber timber) {
 
     /** The title block on every sheet. */
     public record Sheet(String title, String number, String subject, String revision, String preparedBy, String date,
@@ -32,6 +33,9 @@ public record ReportModel(Sheet sheet, Cover cover, Revision revision, Basis bas
 
     public record Loading(List<Row> beam, Table supports, List<Figure> diagrams, Table loads, String combinationSource,
                           Table combinations, List<String> dropped, List<String> patternNote) {}
+
+    /** The take-off of the area loads and the live load reduction worked beneath it; null without area loads. */
+    public record AreaLoads(Table takeOff, List<Equation> reduction) {}
 
     public record CombinationSheet(String anchor, String name, String governs, Table reactions, List<Equation> equilibrium,
                                    List<Figure> figures, Table keyPoints, String method, List<NumberedStep> steps,

@@ -59,6 +59,7 @@ final class ReportModelBuilder {
                 : new RevisionPart(result, checks, previous, previousChecks, t).build();
         ReportModel model = new ReportModel(sheet, cover(checks, analyses, revision != null), revision, basis(), loading.build(), analyses, envelope,
                 new ReactionsPart(result, t).build(), stresses, checks(checks), cautions(), reviewChecklist(), history(), appendix(),
+                new TakeOffPart(job.takeOff(), job.report().units(), t).build(),
                 new TimberPart(result, t).build());
         return new Built(model, drawings);
     }

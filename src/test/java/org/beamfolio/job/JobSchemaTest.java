@@ -114,7 +114,9 @@ class JobSchemaTest {
             "missing-version", "wrong-version", "unknown-builtin-set", "factor-not-number", "moment-without-sense", "spring-without-k",
             "deflection-limit-bad", "linear-one-intensity", "list-where-mapping", "top-level-list", "us-kip-as-length",
             "us-misspelt-kip", "us-feet-and-inches-as-force", "us-fraction-zero-denominator", "follow-on-material-fails",
-            "follow-on-load-fails");
+            "follow-on-load-fails", "area-pressure-as-line-load", "area-line-load-as-pressure", "area-width-wrong-dimension",
+            "area-varying-width-wrong-dimension", "area-reducible-dead-load", "area-kll-not-in-table", "area-load-with-case",
+            "area-width-on-line-load");
 
     @Test
     void theSchemaAndTheToolRejectTheSameMistakes() throws Exception {
