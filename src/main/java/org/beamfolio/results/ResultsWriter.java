@@ -104,6 +104,8 @@ public final class ResultsWriter {
         }
         reactions(g, result, u);
         g.writeArrayFieldStart("checks");
+        java.util.Map<String, org.beamfolio.checks.timber.TimberChecks.Checked> design = new java.util.HashMap<>();
+        org.beamfolio.checks.timber.TimberChecks.checked(result).forEach(c -> design.put(c.outcome().id(), c));
         for (CheckOutcome check : checks) {
             g.writeStartObject();
             g.writeStringField("id", check.id());
@@ -115,9 +117,31 @@ public final class ResultsWriter {
             g.writeStringField("combination", check.combination());
             g.writeNumberField("at", u.length().fromSi(check.at()));
             g.writeStringField("unit", check.unit());
+            designFields(g, design.get(check.id()));
             g.writeEndObject();
         }
         g.writeEndArray();
+        g.writeEndObject();
+    }
+
+    /** The contract's design fields of a check: kind, clause, limit state, unbraced segment, factors. */
+    private static void designFields(JsonGenerator g, org.beamfolio.checks.timber.TimberChecks.Checked c) throws IOException {
+        if (c == null) {
+            return;
+        }
+        g.writeStringField("kind", c.kind());
+        g.writeStringField("clause", c.clause());
+        g.writeStringField("limit_state", c.limitState());
+        if (c.segment() != null) {
+            g.writeArrayFieldStart("segment");
+            g.writeNumber(c.segment()[0]);
+            g.writeNumber(c.segment()[1]);
+            g.writeEndArray();
+        }
+        g.writeObjectFieldStart("factors");
+        for (java.util.Map.Entry<String, Double> f : c.factors().entrySet()) {
+            g.writeNumberField(f.getKey(), f.getValue());
+        }
         g.writeEndObject();
     }
 
