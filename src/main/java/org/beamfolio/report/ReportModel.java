@@ -70,7 +70,7 @@ public record ReportModel(Sheet sheet, Cover cover, Revision revision, Basis bas
      * source, the governing bending check's factors and Fb' worked, and every combination's checks.
      */
     public record Timber(List<String> basis, Table reference, String source, Table factors, List<Equation> fbPrime,
-                         Table bending, Table shear, Table bearing, Table longTerm, String creep) {}
+                         Table bending, Table shear, Table bearing, Table longTerm, String shearNote, String creep) {}
 
     public record Appendix(List<Row> lines, String digest, String toolVersion, String attachment) {}
 }

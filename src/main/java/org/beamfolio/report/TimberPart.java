@@ -94,6 +94,10 @@ final class TimberPart {
                     + ")" + (lt.shortTermCases().isEmpty() ? "" : " + " + String.join(" + ", lt.shortTermCases())),
                     t.deflection(lt.deflection()), lt.limitText() + " = " + t.deflection(lt.allowed()), Numbers.format(lt.ratio())));
         }
+        String shearNote = gs != null && gs.nearSupportsReduced()
+                ? "fv = 1.5 V / A at the largest shear, V with the loads within d of the bearings' faces left out and concentrated"
+                  + " loads there times x/d (NDS 3.4.3.1(a)); supports without a bearing length and the self weight keep every load."
+                : "fv = 1.5 V / A at the largest shear; no support has a bearing length, so every load is kept (conservative).";
         return new ReportModel.Timber(basis, new ReportModel.Table(List.of("Reference value", "Value", "Note"), reference), source,
                 factors, worked,
                 new ReportModel.Table(List.of("Combination", "Shortest load", "CD", "M", "At", "Face in tension", "fb", "Fb'", "Ratio", ""), bending),
@@ -101,7 +105,7 @@ final class TimberPart {
                 bearing.isEmpty() ? null : new ReportModel.Table(List.of("Support", "At", "Largest R", "Under", "b x lb", "fc_perp", "Cb",
                         "Fc_perp'", "Ratio"), bearing),
                 creep.isEmpty() ? null : new ReportModel.Table(List.of("Limit on", "Region", "Deflection of", "delta_T", "Limit", "Ratio"), creep),
-                "Kcr = " + Numbers.format(d.kcr().value()) + " (" + d.kcr().basis() + ", " + d.kcr().clause()
+                shearNote, "Kcr = " + Numbers.format(d.kcr().value()) + " (" + d.kcr().basis() + ", " + d.kcr().clause()
                         + "): delta_T = Kcr delta_LT + delta_ST, the long-term part being the cases of permanent duration.");
     }
 

@@ -74,6 +74,12 @@ public final class TimberBeamDesign {
 
         TimberDesignResult design() {
             List<CombinationResult> combinations = StressCombinations.of(result.combinations());
+            Map<String, CombinationResult> forShear = new LinkedHashMap<>();
+            boolean nearSupports = ShearNearSupports.applies(result.job());
+            if (nearSupports) {
+                double d = ((SectionShape.Rectangle) result.job().sections().get(result.job().beam().section()).shape()).h();
+                ShearNearSupports.solve(result.job(), d).combinations().forEach(c -> forShear.put(c.name(), c));
+            }
             List<TimberDesignResult.Bending> bending = new ArrayList<>();
             List<TimberDesignResult.Shear> shear = new ArrayList<>();
             for (CombinationResult c : combinations) {
@@ -81,7 +87,7 @@ public final class TimberBeamDesign {
                 if (b != null) {
                     bending.add(b);
                 }
-                shear.add(shear(c));
+                shear.add(shear(c, nearSupports ? forShear.get(c.name()) : c, nearSupports));
             }
             TimberValues values = material(0).timber();
             Factor kcr = Creep.kcr(design.service());
@@ -217,12 +223,13 @@ public final class TimberBeamDesign {
         }
 
         /**
-         * fv = 1.5 V / A at the largest |V| (NDS Eq. 3.4-2). The loads within d of a support are
-         * not left out (NDS 3.4.3.1 allows it; keeping them is conservative).
+         * fv = 1.5 V / A at the largest |V| (NDS Eq. 3.4-2), V from {@code reduced}: the same
+         * combination with the loads near the bearings left out ({@link ShearNearSupports}), or
+         * the combination itself.
          */
-        private TimberDesignResult.Shear shear(CombinationResult c) {
+        private TimberDesignResult.Shear shear(CombinationResult c, CombinationResult reduced, boolean nearSupports) {
             LoadDuration cd = design.durationOf(c.factors());
-            Field v = c.response().shear();
+            Field v = reduced.response().shear();
             TimberDesignResult.Shear best = null;
             for (int e = 0; e < model.elements(); e++) {
                 for (int sign : new int[] {1, -1}) {
@@ -231,7 +238,7 @@ public final class TimberBeamDesign {
                     double area = r.b() * r.h();
                     double fv = 1.5 * Math.abs(x.value()) / area;
                     TimberDesignResult.Shear row = new TimberDesignResult.Shear(c.name(), cd, design.governingCase(c.factors()),
-                            x.at(), x.value(), area, fv, adjusted(e).shear(cd));
+                            x.at(), x.value(), area, fv, adjusted(e).shear(cd), nearSupports);
                     if (best == null || row.ratio() > best.ratio()) {
                         best = row;
                     }

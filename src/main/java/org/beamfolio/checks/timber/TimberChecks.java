@@ -52,7 +52,9 @@ public final class TimberChecks {
         TimberDesignResult.Shear s = d.governingShear();
         if (s != null) {
             CheckOutcome o = new CheckOutcome("nds-shear", "Shear stress fv = 1.5 V / A against Fv', CD = " + s.cd().factor()
-                    + " (" + s.durationCase() + "); loads within d of a support not left out (conservative)",
+                    + " (" + s.durationCase() + "); " + (s.nearSupportsReduced()
+                    ? "loads within d of the bearings' faces left out, concentrated ones times x/d (NDS 3.4.3.1(a))"
+                    : "no support has a bearing length, so every load is kept (conservative)"),
                     u.stress().fromSi(s.fv()), u.stress().fromSi(s.adjusted().value()), s.ratio(), s.ratio() <= 1,
                     s.combination(), s.at(), stress);
             Map<String, Double> f = new LinkedHashMap<>();

@@ -79,9 +79,13 @@ public record TimberDesignResult(TimberValues values, List<Bending> bending, Lis
         }
     }
 
-    /** Shear under one combination: fv = 1.5 V / A (NDS 3.4.2, Eq. 3.4-2). */
+    /**
+     * Shear under one combination: fv = 1.5 V / A (NDS 3.4.2, Eq. 3.4-2).
+     *
+     * @param nearSupportsReduced whether the loads within d of the bearings were left out (NDS 3.4.3.1(a))
+     */
     public record Shear(String combination, LoadDuration cd, String durationCase, double at, double v, double area,
-                        double fv, AdjustedValues.Adjusted adjusted) implements Rated {
+                        double fv, AdjustedValues.Adjusted adjusted, boolean nearSupportsReduced) implements Rated {
         @Override
         public double ratio() {
             return fv / adjusted.value();

@@ -245,4 +245,35 @@ class TimberJobTest {
         assertEquals(1450 * PSI, b.adjusted().reference(), 1e-6);
         assertNotNull(b.adjusted());
     }
+
+    /**
+     * NDS 2018 3.4.3.1(a), by hand: a 2x10 (d = 9.25 in) on 12 ft with 3.5 in bearings; the
+     * uniform load within d of each face (11 in from each support's centre) is left out, and a
+     * 200 lb load 6 in from the left support's centre (x = 4.25 in from the face) counts
+     * x / d of itself. The largest shear is then the left reaction of what remains.
+     */
+    @Test
+    void shearLeavesOutTheLoadsWithinDOfTheBearings() {
+        AnalysisResult r = TestJobs.solve(job(SAWN_2X10, "  j: { lumber: 2x10 }\n", """
+                  length: 12 ft
+                  section: j
+                  material: dfl2
+                  supports:
+                    - { at: 0 ft, type: pin, bearing: 3.5 in }
+                    - { at: 12 ft, type: roller, bearing: 3.5 in }
+                  bracing: { top: continuous }
+                """, "  - { case: D, type: uniform, w: 120 lb/ft }\n  - { case: D, type: point, P: 200 lb, at: 6 in }\n",
+                "design:\n  timber: NDS-2018\n"));
+        TimberDesignResult.Shear s = TimberBeamDesign.of(r).governingShear();
+        assertTrue(s.nearSupportsReduced());
+        double w = 10; // lb/in
+        double loaded = 144 - 2 * 11;
+        double p = 200 * 4.25 / 9.25;
+        double left = w * loaded / 2 + p * (144 - 6) / 144;
+        assertEquals(left, Math.abs(s.v()) / 4.4482216152605, 1e-6, "V = w (144 - 22) / 2 + P (x/d) (138/144), lb");
+        assertEquals(1.5 * left / (1.5 * 9.25), s.fv() / PSI, 1e-6);
+        // the bending check keeps every load: M at midspan from the whole uniform load and the whole point load
+        TimberDesignResult.Bending b = TimberBeamDesign.of(r).governingBending();
+        assertTrue(Math.abs(b.moment()) / (4.4482216152605 * 0.0254) > w * 144 * 144 / 8, "bending is not reduced");
+    }
 }
