@@ -36,7 +36,7 @@ public final class Analysis {
             sections.put(s.id(), SectionCalculator.of(s));
         }
         List<Load> loads = new ArrayList<>(job.loads());
-        loads.addAll(SelfWeight.loads(job.beam(), sections, job.materials()));
+        loads.addAll(SelfWeight.loads(job.beam(), sections, job.materials(), job.sections()));
         StructureModel model = StructureModel.build(job.beam(), loads, sections, job.materials());
         Set<String> caseNames = new LinkedHashSet<>();
         loads.forEach(l -> caseNames.add(l.loadCase()));
@@ -83,7 +83,7 @@ public final class Analysis {
         }
         Extremes envelope = Envelope.of(results);
         return new AnalysisResult(job, model, List.copyOf(loads), sections, cases, results, envelope, dropped, source, spans,
-                patterns, reactions, GoverningStresses.of(job, model, results));
+                patterns, reactions, GoverningStresses.of(job, model, results), new Worked());
     }
 
     private static Response solve(StructureModel model, List<Load> loads, String name, Job job) throws UnstableBeamException {

@@ -16,11 +16,13 @@ import org.beamfolio.section.SectionProperties;
  * @param patterns the pattern cases by region and the arrangements examined (none without {@code pattern})
  * @param reactions the largest and smallest reaction at each support over every combination and arrangement
  * @param stresses the governing stresses, found once for the checks, the worked steps and the summary
+ * @param worked what later stages work out from this analysis, each worked once ({@link Worked})
  */
 public record AnalysisResult(Job job, StructureModel model, List<org.beamfolio.model.Load> loads, Map<String, SectionProperties> sections,
                              Map<String, Response> cases, List<CombinationResult> combinations,
                              Extremes envelope, List<String> droppedCombinations, String combinationSource,
-                             List<Span> spans, Patterns patterns, ReactionEnvelope reactions, GoverningStresses stresses) {
+                             List<Span> spans, Patterns patterns, ReactionEnvelope reactions, GoverningStresses stresses,
+                             Worked worked) {
     /** Below this smallest pivot ratio the package warns that the model is badly conditioned. */
     public static final double POOR_CONDITIONING = 1e-8;
 

@@ -16,6 +16,7 @@ public final class Checks {
             checks.add(new FibreStressCheck(FibreStressCheck.Kind.COMPRESSION));
             checks.add(new ShearStressCheck());
         }
+        checks.add(org.beamfolio.design.steel.SteelChecks::run);
         checks.add(new DeflectionCheck());
         List<CheckOutcome> outcomes = new ArrayList<>();
         for (Check check : checks) {

@@ -11,13 +11,13 @@ import org.beamfolio.loads.ReductionSettings;
 final class DesignReader {
     private DesignReader() {}
 
-    static ReductionSettings reductions(ReadContext c, YamlNode node) {
-        if (node == null) {
-            return ReductionSettings.NONE;
-        }
-        ReadContext.Fields f = c.fields(node, "design");
+    /**
+     * @param f the {@code design} mapping, or null when the job has none; the other design readers
+     *          read their own keys of it, and the job reader rejects unknown keys once all have read
+     */
+    static ReductionSettings reductions(ReadContext c, ReadContext.Fields f) {
         if (f == null) {
-            return null;
+            return ReductionSettings.NONE;
         }
         boolean ok = true;
         Double kll = null;
@@ -66,8 +66,6 @@ final class DesignReader {
                 r.rejectUnknown();
             }
         }
-        // the timber keys are TimberDesignReader's
-        f.rejectUnknown("timber", "timber_service", "durations", "method");
         return ok ? new ReductionSettings(kll, floors, rise, live != null, roof != null) : null;
     }
 

@@ -23,6 +23,7 @@ import org.beamfolio.model.Project;
 import org.beamfolio.model.ReportSettings;
 import org.beamfolio.model.Section;
 import org.beamfolio.model.TimberDesign;
+import org.beamfolio.model.SteelDesign;
 import org.beamfolio.units.Dimension;
 import org.beamfolio.units.Lengths;
 
@@ -153,7 +154,10 @@ public final class JobReader {
             YamlNode beamNode = top.required("beam");
             Beam beam = BeamReader.read(context, beamNode, Defined.keysOf(materialsNode, materials), Defined.keysOf(sectionsNode, sections));
             Defined<org.beamfolio.loads.AreaLoad> areaLoads = AreaLoadReader.readAll(context, top.optional("area_loads"));
-            org.beamfolio.loads.ReductionSettings reductions = DesignReader.reductions(context, top.optional("design"));
+            YamlNode designNode = top.optional("design");
+            ReadContext.Fields design = designNode == null ? null : context.fields(designNode, "design");
+            org.beamfolio.loads.ReductionSettings reductions = designNode != null && design == null ? null
+                    : DesignReader.reductions(context, design);
             LoadReader.Read read = LoadReader.readAll(context, top.optional("loads"), beam, areaLoads, reductions);
             List<Load> loads = read.loads();
             Map<String, String> cases = cases(top.optional("cases"));
@@ -164,18 +168,24 @@ public final class JobReader {
             }
             Defined<String> loadCases = LoadCases.of(loads, beam, beamNode, top.optional("loads"), areaLoads);
             CombinationReader.Outcome combos = CombinationReader.read(context, top, loadCases, beam);
-            TimberDesign timber = TimberDesignReader.read(context, top.optional("design"), loadCases, materials, sections, beam,
+            TimberDesign timber = TimberDesignReader.read(context, design, loadCases, materials, sections, beam,
                     beamNode, combos == null ? null : combos.setName());
             materials = TimberDesignReader.withAdjustedModulus(materials, timber);
             if (combos != null && combos.stressCheck() && beam != null) {
                 requireAllowables(top, materials, beam);
+            }
+            SteelDesign steel = SteelDesignReader.read(context, design, combos == null ? null : combos.setName(), beam,
+                    materials, sections, sectionsNode, materialsNode);
+            if (design != null) {
+                design.rejectUnknown();
             }
             top.rejectUnknown();
             if (!context.diagnostics().isEmpty() || project == null || beam == null || combos == null) {
                 return null;
             }
             return new Job(name, text, sha256(bytes), project, report, materials, sections, beam, loads, cases,
-                    combos.setName(), combos.combinations(), combos.pattern(), combos.stressCheck(), combos.deflection(), bytes, read.takeOff(), timber);
+                    combos.setName(), combos.combinations(), combos.pattern(), combos.stressCheck(), combos.deflection(), bytes,
+                    read.takeOff(), steel, timber);
         }
 
         /** A stress check compares with the allowables, so every material on the beam must give them. */

@@ -27,23 +27,25 @@ import org.beamfolio.units.Suggest;
  */
 final class TimberDesignReader {
     static final List<String> STANDARDS = List.of("NDS-2018");
-    static final List<String> METHODS = List.of("ASD", "LRFD");
     static final List<String> TEMPERATURES = List.of("normal", "elevated", "high");
 
     private TimberDesignReader() {}
 
     /** The timber design, or null when the job asks for none or something is wrong (then with its message). */
-    static TimberDesign read(ReadContext c, YamlNode designNode, Defined<String> cases, Map<String, Material> materials,
+    /**
+     * @param f the {@code design} mapping (its unknown keys are rejected once, by the job reader), or null
+     */
+    static TimberDesign read(ReadContext c, ReadContext.Fields f, Defined<String> cases, Map<String, Material> materials,
                              Map<String, Section> sections, Beam beam, YamlNode beamNode, String setName) {
-        if (!(designNode instanceof YamlNode.Mapping)) {
-            return null; // absent, or not a mapping: DesignReader reports that, and the design block's unknown keys
+        if (f == null) {
+            return null;
         }
-        ReadContext.Fields f = c.fields(designNode, "design");
         YamlNode timberNode = f.optional("timber");
         YamlNode methodNode = f.optional("method");
         YamlNode serviceNode = f.optional("timber_service");
         YamlNode durationsNode = f.optional("durations");
-        String method = methodNode == null ? null : c.choice(methodNode, f.path("method"), METHODS);
+        // the steel reader reads method and reports a bad value; here only whether it asks for LRFD
+        String method = methodNode instanceof YamlNode.Scalar m ? m.text().strip().toUpperCase(Locale.ROOT) : null;
         if (timberNode == null) {
             for (YamlNode n : new YamlNode[] {serviceNode, durationsNode}) {
                 if (n != null) {

@@ -11,22 +11,23 @@ import java.util.Map;
  * @param sourceBytes the job file exactly as read, for the package's attachment
  * @param takeOff where the line loads that came from area loads came from, and the live load
  *        reductions taken (those line loads are already in {@code loads}, reduced)
- * @param timber the timber design the job asks for ({@code design.timber}), or null
+ * @param steelDesign steel design to AISC 360 ({@code design.steel}), or null when the job asks for none
+ * @param timber timber design to the NDS ({@code design.timber}), or null when the job asks for none
  */
 public record Job(String name, String sourceText, String sha256, Project project, ReportSettings report,
                   Map<String, Material> materials, Map<String, Section> sections, Beam beam,
                   List<Load> loads, Map<String, String> cases, String combinationSet,
                   List<Combination> combinations, List<String> pattern, boolean stressCheck,
                   List<DeflectionLimit> deflectionLimits, byte[] sourceBytes,
-                  org.beamfolio.loads.TakeOff takeOff, TimberDesign timber) {
-    /** A job of line loads only, without timber design. */
+                  org.beamfolio.loads.TakeOff takeOff, SteelDesign steelDesign, TimberDesign timber) {
+    /** A job of line loads only. */
     public Job(String name, String sourceText, String sha256, Project project, ReportSettings report,
                Map<String, Material> materials, Map<String, Section> sections, Beam beam,
                List<Load> loads, Map<String, String> cases, String combinationSet,
                List<Combination> combinations, List<String> pattern, boolean stressCheck,
                List<DeflectionLimit> deflectionLimits, byte[] sourceBytes) {
         this(name, sourceText, sha256, project, report, materials, sections, beam, loads, cases, combinationSet,
-                combinations, pattern, stressCheck, deflectionLimits, sourceBytes, org.beamfolio.loads.TakeOff.EMPTY);
+                combinations, pattern, stressCheck, deflectionLimits, sourceBytes, org.beamfolio.loads.TakeOff.EMPTY, null, null);
     }
 
     /** A job without timber design. */
@@ -34,9 +35,10 @@ public record Job(String name, String sourceText, String sha256, Project project
                Map<String, Material> materials, Map<String, Section> sections, Beam beam,
                List<Load> loads, Map<String, String> cases, String combinationSet,
                List<Combination> combinations, List<String> pattern, boolean stressCheck,
-               List<DeflectionLimit> deflectionLimits, byte[] sourceBytes, org.beamfolio.loads.TakeOff takeOff) {
+               List<DeflectionLimit> deflectionLimits, byte[] sourceBytes,
+               org.beamfolio.loads.TakeOff takeOff, SteelDesign steelDesign) {
         this(name, sourceText, sha256, project, report, materials, sections, beam, loads, cases, combinationSet,
-                combinations, pattern, stressCheck, deflectionLimits, sourceBytes, takeOff, null);
+                combinations, pattern, stressCheck, deflectionLimits, sourceBytes, takeOff, steelDesign, null);
     }
 
     public Job {

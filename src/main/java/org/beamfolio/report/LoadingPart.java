@@ -105,7 +105,9 @@ final class LoadingPart {
         List<String> hinges = job.beam().hinges().stream().map(Hinge::at).map(t::len).toList();
         rows.add(new ReportModel.Row("Internal hinges", hinges.isEmpty() ? "none" : String.join(", ", hinges)));
         if (job.beam().selfWeightCase() != null) {
-            rows.add(new ReportModel.Row("Self weight", "density × area, added to case " + job.beam().selfWeightCase()));
+            boolean catalogued = job.sections().values().stream().anyMatch(x -> x.shape() instanceof org.beamfolio.model.SectionShape.Catalogued);
+            rows.add(new ReportModel.Row("Self weight", (catalogued ? "catalogue shapes: the tabulated nominal weight per length W;"
+                    + " other sections: " : "") + "density × area, added to case " + job.beam().selfWeightCase()));
         }
         return rows;
     }

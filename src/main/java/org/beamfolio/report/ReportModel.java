@@ -10,7 +10,7 @@ import java.util.List;
 public record ReportModel(Sheet sheet, Cover cover, Revision revision, Basis basis, Loading loading, List<CombinationSheet> analyses,
                           Envelope envelope, Reactions reactions, Stresses stresses, Checks checks, List<String> cautions,
                           List<String> reviewChecklist, List<List<String>> history, Appendix appendix, AreaLoads areaLoads,
-                          Timber timber) {
+                          SteelSheet steel, Timber timber) {
 
     /** The title block on every sheet. */
     public record Sheet(String title, String number, String subject, String revision, String preparedBy, String date,
@@ -64,6 +64,13 @@ public record ReportModel(Sheet sheet, Cover cover, Revision revision, Basis bas
 
     /** What changed since the previous revision; null without {@code --previous}. */
     public record Revision(String revisions, Table inputs, Table results, Table checks) {}
+
+    /**
+     * The steel design sheet (null without {@code design.steel}): the member, the catalogue row used,
+     * compactness, the unbraced segments, and the governing flexure, shear and web bearing worked out.
+     */
+    public record SteelSheet(String title, List<Row> member, Table catalogueRow, Table compactness, Table segments,
+                             String flexureNote, List<Equation> flexure, List<Equation> shear, List<Equation> bearing) {}
 
     /**
      * The timber design sheet (null without {@code design.timber}): basis, reference values and

@@ -57,9 +57,10 @@ final class ReportModelBuilder {
         ReportModel.Stresses stresses = new StressPart(result, t).build();
         ReportModel.Revision revision = previous == null ? null
                 : new RevisionPart(result, checks, previous, previousChecks, t).build();
-        ReportModel model = new ReportModel(sheet, cover(checks, analyses, revision != null), revision, basis(), loading.build(), analyses, envelope,
-                new ReactionsPart(result, t).build(), stresses, checks(checks), cautions(), reviewChecklist(), history(), appendix(),
-                new TakeOffPart(job.takeOff(), job.report().units(), t).build(),
+        ReportModel.SteelSheet steel = new SteelPart(result, t).build();
+        ReportModel model = new ReportModel(sheet, cover(checks, analyses, revision != null, steel != null), revision, basis(),
+                loading.build(), analyses, envelope, new ReactionsPart(result, t).build(), stresses, checks(checks), cautions(),
+                reviewChecklist(), history(), appendix(), new TakeOffPart(job.takeOff(), job.report().units(), t).build(), steel,
                 new TimberPart(result, t).build());
         return new Built(model, drawings);
     }
@@ -93,7 +94,8 @@ final class ReportModelBuilder {
         return out;
     }
 
-    private ReportModel.Cover cover(List<CheckOutcome> checks, List<ReportModel.CombinationSheet> analyses, boolean revision) {
+    private ReportModel.Cover cover(List<CheckOutcome> checks, List<ReportModel.CombinationSheet> analyses, boolean revision,
+                                    boolean steel) {
         Job job = result.job();
         long spans = result.spans().stream().filter(s -> s.label().startsWith("span ")).count();
         String layout = result.spans().stream().anyMatch(s -> s.label().contains("cantilever")) ? "cantilever"
@@ -115,6 +117,9 @@ final class ReportModelBuilder {
         contents.add(new ReportModel.Row("Envelope over all combinations", "envelope"));
         contents.add(new ReportModel.Row("Reactions for the supporting structure", "reactions"));
         contents.add(new ReportModel.Row("Section properties and stresses", "stresses"));
+        if (steel) {
+            contents.add(new ReportModel.Row("Steel design", "steel"));
+        }
         if (result.job().timber() != null) {
             contents.add(new ReportModel.Row("Timber design to the NDS", "timber"));
         }
@@ -130,6 +135,11 @@ final class ReportModelBuilder {
         Job job = result.job();
         List<String> codes = new ArrayList<>();
         codes.add("Load combinations: " + result.combinationSource() + ".");
+        if (job.steelDesign() != null) {
+            codes.add("Steel: " + org.beamfolio.design.steel.Edition.find(job.steelDesign().specification()).orElseThrow().label()
+                    + ", Specification for Structural Steel Buildings, " + (job.steelDesign().lrfd() ? "LRFD" : "ASD")
+                    + "; shape properties from the " + org.beamfolio.catalogue.ShapeCatalogue.SOURCE + ".");
+        }
         boolean springs = job.beam().supports().stream().anyMatch(s -> s.kind() instanceof org.beamfolio.model.SupportKind.Spring);
         for (DeflectionLimit d : job.deflectionLimits()) {
             String cases = String.join(" + ", d.cases());
@@ -173,9 +183,12 @@ final class ReportModelBuilder {
                         ? " THE MODEL IS BADLY CONDITIONED: the results satisfy equilibrium to the residuals shown, but verify the supports and"
                           + " stiffnesses; a very stiff spring or a very short span beside long ones is the usual cause." : ""));
         List<String> limitations = List.of(
-                "Sections are modelled as rectangles without fillets or rounded corners, or by closed forms; given properties are used as stated.",
+                "Sections are modelled as rectangles without fillets or rounded corners, or by closed forms; given properties are used as stated"
+                        + (job.sections().values().stream().anyMatch(x -> x.shape() instanceof org.beamfolio.model.SectionShape.Catalogued)
+                        ? "; catalogue shapes use their tabulated properties." : "."),
                 "Supports are points; springs are linear. Support settlement is not included unless modelled by a spring.",
-                "Not checked unless shown: lateral-torsional and local buckling, connections, bearing and web crippling, vibration, fire, fatigue, creep and second-order effects.");
+                job.steelDesign() != null ? steelScope() + " Not checked: connections, vibration, fire, fatigue and second-order effects."
+                        : "Not checked unless shown: lateral-torsional and local buckling, connections, bearing and web crippling, vibration, fire, fatigue, creep and second-order effects.");
         List<String> materialHeader = List.of("Material", "E (" + (u.stress().symbol().equals("psi") ? "ksi" : "MPa") + ")",
                 "Density", "Allowable tension", "Allowable compression", "Allowable shear", "Source");
         List<List<String>> materialRows = new ArrayList<>();
@@ -223,9 +236,24 @@ final class ReportModelBuilder {
         cautions.addAll(List.of(
                 "This package is valid only when it has been reviewed, signed and sealed by a licensed professional engineer who takes responsibility for the design. The software does not replace the engineer's judgement.",
                 "Loads, load combinations, support conditions, section dimensions and material values are the engineer's inputs: verify them against the governing building code, the referenced standards and the requirements of the authority having jurisdiction.",
-                "The method's limits: linear elastic, small deflections, Euler-Bernoulli beams without shear deformation, point supports. Lateral-torsional buckling, local buckling, connections, bearing, web crippling, vibration, fire, fatigue, creep and second-order effects are not checked unless shown in this package.",
-                "Allowable stresses are those given in the job file; they must already include whatever reductions the governing standard requires."));
+                result.job().steelDesign() != null
+                        ? "The method's limits: linear elastic, small deflections, Euler-Bernoulli beams without shear deformation, point supports. "
+                          + steelScope() + " Connections, vibration, fire, fatigue and second-order effects are not checked; the bracing"
+                          + " stated in the job must be provided and able to brace (AISC 360 Appendix 6 is not checked)."
+                        : "The method's limits: linear elastic, small deflections, Euler-Bernoulli beams without shear deformation, point supports. Lateral-torsional buckling, local buckling, connections, bearing, web crippling, vibration, fire, fatigue, creep and second-order effects are not checked unless shown in this package."));
+        if (result.job().stressCheck() || result.job().steelDesign() == null) {
+            cautions.add("Allowable stresses are those given in the job file; they must already include whatever reductions the governing standard requires.");
+        }
         return cautions;
+    }
+
+    /** What the steel design covers, for the basis and the cautions. */
+    private String steelScope() {
+        var d = result.job().steelDesign();
+        String edition = org.beamfolio.design.steel.Edition.find(d.specification()).map(e -> e.label()).orElse(d.specification());
+        return "Steel design to " + edition + " (" + (d.lrfd() ? "LRFD" : "ASD") + "): flexure with yielding, lateral-torsional"
+                + " and local buckling over each unbraced segment (Chapter F), shear (Chapter G), and web local yielding and"
+                + " crippling (J10.2, J10.3) at supports given a bearing length.";
     }
 
     private List<String> reviewChecklist() {

@@ -37,6 +37,9 @@ final class StressPart {
     }
 
     static String shapeName(Section section) {
+        if (section.shape() instanceof org.beamfolio.model.SectionShape.Catalogued c) {
+            return c.shape().designation() + (section.flip() ? ", flipped" : "");
+        }
         String name = switch (section.shape().getClass().getSimpleName()) {
             case "IBeam" -> "I shape";
             case "Given" -> "given properties";

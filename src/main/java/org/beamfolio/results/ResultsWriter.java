@@ -104,8 +104,6 @@ public final class ResultsWriter {
         }
         reactions(g, result, u);
         g.writeArrayFieldStart("checks");
-        java.util.Map<String, org.beamfolio.checks.timber.TimberChecks.Checked> design = new java.util.HashMap<>();
-        org.beamfolio.checks.timber.TimberChecks.checked(result).forEach(c -> design.put(c.outcome().id(), c));
         for (CheckOutcome check : checks) {
             g.writeStartObject();
             g.writeStringField("id", check.id());
@@ -117,31 +115,32 @@ public final class ResultsWriter {
             g.writeStringField("combination", check.combination());
             g.writeNumberField("at", u.length().fromSi(check.at()));
             g.writeStringField("unit", check.unit());
-            designFields(g, design.get(check.id()));
+            if (check.kind() != null) {
+                g.writeStringField("kind", check.kind());
+            }
+            if (check.clause() != null) {
+                g.writeStringField("clause", check.clause());
+            }
+            if (check.limitState() != null) {
+                g.writeStringField("limit_state", check.limitState());
+            }
+            if (!check.segment().isEmpty()) {
+                g.writeArrayFieldStart("segment");
+                for (double x : check.segment()) {
+                    g.writeNumber(u.length().fromSi(x));
+                }
+                g.writeEndArray();
+            }
+            if (!check.factors().isEmpty()) {
+                g.writeObjectFieldStart("factors");
+                for (Map.Entry<String, Double> f : check.factors().entrySet()) {
+                    g.writeNumberField(f.getKey(), f.getValue());
+                }
+                g.writeEndObject();
+            }
             g.writeEndObject();
         }
         g.writeEndArray();
-        g.writeEndObject();
-    }
-
-    /** The contract's design fields of a check: kind, clause, limit state, unbraced segment, factors. */
-    private static void designFields(JsonGenerator g, org.beamfolio.checks.timber.TimberChecks.Checked c) throws IOException {
-        if (c == null) {
-            return;
-        }
-        g.writeStringField("kind", c.kind());
-        g.writeStringField("clause", c.clause());
-        g.writeStringField("limit_state", c.limitState());
-        if (c.segment() != null) {
-            g.writeArrayFieldStart("segment");
-            g.writeNumber(c.segment()[0]);
-            g.writeNumber(c.segment()[1]);
-            g.writeEndArray();
-        }
-        g.writeObjectFieldStart("factors");
-        for (java.util.Map.Entry<String, Double> f : c.factors().entrySet()) {
-            g.writeNumberField(f.getKey(), f.getValue());
-        }
         g.writeEndObject();
     }
 

@@ -18,15 +18,7 @@ import org.beamfolio.results.ReportUnits;
 public final class TimberChecks {
     private TimberChecks() {}
 
-    /** A check with the contract's design fields. */
-    public record Checked(CheckOutcome outcome, String kind, String clause, String limitState, double[] segment,
-                          Map<String, Double> factors) {}
-
     public static List<CheckOutcome> run(AnalysisResult result) {
-        return checked(result).stream().map(Checked::outcome).toList();
-    }
-
-    public static List<Checked> checked(AnalysisResult result) {
         TimberDesignResult d = TimberBeamDesign.of(result);
         if (d == null) {
             return List.of();
@@ -34,51 +26,51 @@ public final class TimberChecks {
         ReportUnits u = ReportUnits.of(result.job().report().units());
         String stress = u.stress().symbol();
         int count = d.bending().size();
-        List<Checked> out = new ArrayList<>();
+        List<CheckOutcome> out = new ArrayList<>();
         TimberDesignResult.Bending b = d.governingBending();
         if (b != null) {
             String face = b.hogging() ? "hogging, top face in tension" : "sagging, bottom face in tension";
             String stability = b.adjusted().has("CV") ? b.adjusted().governingStability() + " (lesser of CL and CV)" : "CL";
-            CheckOutcome o = new CheckOutcome("nds-bending", "Bending stress fb = M / S against Fb' (" + face + "), "
+            out.add(new CheckOutcome("nds-bending", "Bending stress fb = M / S against Fb' (" + face + "), "
                     + "CD = " + b.cd().factor() + " (" + b.durationCase() + ", " + b.cd().key().replace('_', ' ') + "), "
                     + stability + " = " + String.format(java.util.Locale.ROOT, "%.3f", b.adjusted().factor(b.adjusted().governingStability()))
                     + "; governing of " + count + " combinations",
-                    u.stress().fromSi(b.fb()), u.stress().fromSi(b.limit()), b.ratio(), b.ratio() <= 1, b.combination(), b.at(), stress);
-            out.add(new Checked(o, "flexure", "NDS 2018 3.3.1, " + d.values().kind().applicability(),
+                    u.stress().fromSi(b.fb()), u.stress().fromSi(b.limit()), b.ratio(), b.ratio() <= 1, b.combination(), b.at(), stress,
+                    "flexure", "NDS 2018 3.3.1, " + d.values().kind().applicability(),
                     b.adjusted().stability() != null ? "bending with lateral stability (CL)" : "bending",
-                    new double[] {u.length().fromSi(b.segment().from()), u.length().fromSi(b.segment().to())},
+                    List.of(b.segment().from(), b.segment().to()),
                     factors(b.adjusted().factors())));
         }
         TimberDesignResult.Shear s = d.governingShear();
         if (s != null) {
-            CheckOutcome o = new CheckOutcome("nds-shear", "Shear stress fv = 1.5 V / A against Fv', CD = " + s.cd().factor()
+            Map<String, Double> f = new LinkedHashMap<>();
+            f.put("CD", s.cd().factor());
+            f.putAll(factors(s.adjusted().factors()));
+            out.add(new CheckOutcome("nds-shear", "Shear stress fv = 1.5 V / A against Fv', CD = " + s.cd().factor()
                     + " (" + s.durationCase() + "); " + (s.nearSupportsReduced()
                     ? "loads within d of the bearings' faces left out, concentrated ones times x/d (NDS 3.4.3.1(a))"
                     : "no support has a bearing length, so every load is kept (conservative)"),
                     u.stress().fromSi(s.fv()), u.stress().fromSi(s.adjusted().value()), s.ratio(), s.ratio() <= 1,
-                    s.combination(), s.at(), stress);
-            Map<String, Double> f = new LinkedHashMap<>();
-            f.put("CD", s.cd().factor());
-            f.putAll(factors(s.adjusted().factors()));
-            out.add(new Checked(o, "shear", "NDS 2018 3.4.2, Eq. 3.4-2", "shear parallel to grain", null, f));
+                    s.combination(), s.at(), stress,
+                    "shear", "NDS 2018 3.4.2, Eq. 3.4-2", "shear parallel to grain", List.of(), f));
         }
         for (TimberDesignResult.Bearing br : d.bearing()) {
-            CheckOutcome o = new CheckOutcome("nds-bearing-R" + br.support(), "Bearing at R" + br.support()
+            out.add(new CheckOutcome("nds-bearing-R" + br.support(), "Bearing at R" + br.support()
                     + ", fc_perp = R / (b lb) against Fc_perp' (no load-duration factor)",
                     u.stress().fromSi(br.stress()), u.stress().fromSi(br.adjusted().value()), br.ratio(), br.ratio() <= 1,
-                    br.combination(), br.at(), stress);
-            out.add(new Checked(o, "bearing", "NDS 2018 3.10.2, 3.10.4", "compression perpendicular to grain", null,
+                    br.combination(), br.at(), stress,
+                    "bearing", "NDS 2018 3.10.2, 3.10.4", "compression perpendicular to grain", List.of(),
                     factors(br.adjusted().factors())));
         }
         for (TimberDesignResult.LongTerm lt : d.deflection()) {
-            CheckOutcome o = new CheckOutcome("nds-long-term-" + String.join("+", lt.limitCases().split(" \\+ ")) + "-"
+            out.add(new CheckOutcome("nds-long-term-" + String.join("+", lt.limitCases().split(" \\+ ")) + "-"
                     + lt.region().replace("span ", "span").replace(" ", "-"),
                     "Long-term deflection in " + lt.region() + ", Kcr (" + String.join(" + ", lt.longTermCases()) + ")"
                             + (lt.shortTermCases().isEmpty() ? "" : " + " + String.join(" + ", lt.shortTermCases()))
                             + " with Kcr = " + d.kcr().value() + ", limit " + lt.limitText(),
                     u.deflection().fromSi(lt.deflection()), u.deflection().fromSi(lt.allowed()), lt.ratio(), lt.ratio() <= 1,
-                    lt.limitCases(), lt.at(), u.deflection().symbol());
-            out.add(new Checked(o, "deflection", "NDS 2018 3.5.2, Eq. 3.5-1", "long-term deflection with creep", null,
+                    lt.limitCases(), lt.at(), u.deflection().symbol(),
+                    "deflection", "NDS 2018 3.5.2, Eq. 3.5-1", "long-term deflection with creep", List.of(),
                     Map.of("Kcr", d.kcr().value())));
         }
         return out;
