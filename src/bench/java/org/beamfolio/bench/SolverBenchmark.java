@@ -19,6 +19,7 @@ import org.beamfolio.model.Section;
 import org.beamfolio.model.SectionShape;
 import org.beamfolio.model.Support;
 import org.beamfolio.model.SupportKind;
+import org.beamfolio.units.UnitSystem;
 import org.openjdk.jmh.annotations.Benchmark;
 import org.openjdk.jmh.annotations.BenchmarkMode;
 import org.openjdk.jmh.annotations.Fork;
@@ -74,7 +75,7 @@ public class SolverBenchmark {
         }
         Beam beam = new Beam(length, "s", "m", supports, List.of(), List.of(), null);
         Project project = new Project("Benchmark", "B-1", "", "", "", "", "", "2026-01-01", "A", List.of(), "");
-        job = new Job("bench", "", "", project, new ReportSettings(ReportSettings.UnitSystem.SI, ReportSettings.Paper.A4),
+        job = new Job("bench", "", "", project, new ReportSettings(UnitSystem.SI, ReportSettings.Paper.A4),
                 Map.of("m", new Material("m", 200e9, null, null, null, null, "")),
                 Map.of("s", new Section("s", new SectionShape.Rectangle(0.2, 0.4), false)), beam, loads, Map.of(), null, combinations,
                 List.of(), false, List.of(), new byte[0]);

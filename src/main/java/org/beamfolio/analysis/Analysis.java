@@ -12,11 +12,13 @@ import org.beamfolio.combinations.CombinationSet;
 import org.beamfolio.model.Combination;
 import org.beamfolio.model.Job;
 import org.beamfolio.model.Load;
+import org.beamfolio.model.Purpose;
 import org.beamfolio.model.ReportSettings;
 import org.beamfolio.model.Section;
 import org.beamfolio.section.SectionCalculator;
 import org.beamfolio.section.SectionProperties;
 import org.beamfolio.units.Lengths;
+import org.beamfolio.units.UnitSystem;
 
 /**
  * The analysis stage's entry point: checks the beam is stable, builds the element model, solves
@@ -26,7 +28,7 @@ public final class Analysis {
     private Analysis() {}
 
     public static AnalysisResult run(Job job) throws UnstableBeamException {
-        Optional<Instability> instability = Stability.check(job.beam(), job.report().units() == ReportSettings.UnitSystem.SI
+        Optional<Instability> instability = Stability.check(job.beam(), job.report().units() == UnitSystem.SI
                 ? Lengths.Style.METRES : Lengths.Style.FEET_AND_INCHES);
         if (instability.isPresent()) {
             throw new UnstableBeamException(instability.get());
@@ -68,7 +70,7 @@ public final class Analysis {
         for (int i = 0; i < combinations.size(); i++) {
             Combination c = combinations.get(i);
             results.add(result(model, stresses, reactions, patterns.terms(c.factors(), null), c.name(), c.factors(),
-                    references.get(i), "", List.of()));
+                    references.get(i), c.purpose(), "", List.of()));
         }
         for (int i = 0; i < combinations.size(); i++) {
             Combination c = combinations.get(i);
@@ -77,7 +79,7 @@ public final class Analysis {
             }
             for (boolean[] loaded : patterns.arrangements()) {
                 results.add(result(model, stresses, reactions, patterns.terms(c.factors(), loaded),
-                        patterns.name(c.name(), c.factors(), loaded), c.factors(), references.get(i),
+                        patterns.name(c.name(), c.factors(), loaded), c.factors(), references.get(i), c.purpose(),
                         patterns.describe(loaded), Patterns.regions(loaded)));
             }
         }
@@ -97,10 +99,10 @@ public final class Analysis {
     }
 
     private static CombinationResult result(StructureModel model, Stresses stresses, ReactionEnvelope reactions, Superposition sum,
-                                            String name, Map<String, Double> factors, String reference, String arrangement,
-                                            List<Integer> regions) {
+                                            String name, Map<String, Double> factors, String reference, Purpose purpose,
+                                            String arrangement, List<Integer> regions) {
         reactions.accept(name, sum.reactionForces(model.supports().size()));
-        return new CombinationResult(name, factors, reference, arrangement, regions, () -> sum.response(model, name),
+        return new CombinationResult(name, factors, reference, purpose, arrangement, regions, () -> sum.response(model, name),
                 stresses.extremes(sum, model.elementStarts(), model.elementEnds()));
     }
 

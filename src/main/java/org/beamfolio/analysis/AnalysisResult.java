@@ -34,6 +34,14 @@ public record AnalysisResult(Job job, StructureModel model, List<org.beamfolio.m
         return cases.values().stream().mapToDouble(Response::pivotRatio).min().orElse(1);
     }
 
-    /** A region between supports (or an overhang), numbered for pattern names. */
-    public record Span(String label, double from, double to) {}
+    /**
+     * A region between supports, or an overhang (a cantilever when the beam has one support),
+     * labelled for the package ("span 2", "right overhang").
+     */
+    public record Span(String label, double from, double to, boolean overhang) {
+        /** The length span-ratio deflection limits apply to: the span, or twice an overhang's length (common practice). */
+        public double limitLength() {
+            return (overhang ? 2 : 1) * (to - from);
+        }
+    }
 }

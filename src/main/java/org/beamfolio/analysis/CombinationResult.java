@@ -2,6 +2,7 @@ package org.beamfolio.analysis;
 
 import java.util.List;
 import java.util.Map;
+import org.beamfolio.model.Purpose;
 import java.util.function.Supplier;
 
 /**
@@ -14,6 +15,7 @@ public final class CombinationResult {
     private final String name;
     private final Map<String, Double> factors;
     private final String reference;
+    private final Purpose purpose;
     private final String arrangement;
     private final List<Integer> loadedRegions;
     private final Extremes extremes;
@@ -22,15 +24,17 @@ public final class CombinationResult {
 
     /**
      * @param reference the clause of the built-in set, or "job file" for an explicit combination
+     * @param purpose what the combination is for (strength, allowable stress, service)
      * @param arrangement the loaded spans of the pattern cases, empty when all spans carry them
      * @param loadedRegions for an arrangement, the indices (into the spans) that carry the pattern cases
      * @param response makes the response when first needed
      */
-    public CombinationResult(String name, Map<String, Double> factors, String reference, String arrangement,
+    public CombinationResult(String name, Map<String, Double> factors, String reference, Purpose purpose, String arrangement,
                              List<Integer> loadedRegions, Supplier<Response> response, Extremes extremes) {
         this.name = name;
         this.factors = factors;
         this.reference = reference;
+        this.purpose = purpose;
         this.arrangement = arrangement;
         this.loadedRegions = List.copyOf(loadedRegions);
         this.pending = response;
@@ -47,6 +51,10 @@ public final class CombinationResult {
 
     public String reference() {
         return reference;
+    }
+
+    public Purpose purpose() {
+        return purpose;
     }
 
     public String arrangement() {

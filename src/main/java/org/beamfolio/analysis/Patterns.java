@@ -82,8 +82,8 @@ public final class Patterns {
         for (int i = 0; i < loaded.length; i++) {
             if (loaded[i]) {
                 String label = spans.get(i).label();
-                if (label.startsWith("span ")) {
-                    numbered.add(label.substring(5));
+                if (!spans.get(i).overhang()) {
+                    numbered.add(label.substring("span ".length()));
                 } else {
                     other.add(label);
                 }

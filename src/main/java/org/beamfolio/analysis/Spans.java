@@ -22,12 +22,13 @@ public final class Spans {
         for (int i = 0; i + 1 < borders.size(); i++) {
             double from = borders.get(i);
             double to = borders.get(i + 1);
+            boolean overhang = to <= first || from >= last;
             String label = to <= first ? "left overhang" : from >= last ? "right overhang" : "span " + ++numbered;
-            spans.add(new AnalysisResult.Span(label, from, to));
+            spans.add(new AnalysisResult.Span(label, from, to, overhang));
         }
         if (beam.supports().size() == 1) {
             // a single support: the whole beam cantilevers from it (to one side or both)
-            spans.replaceAll(s -> new AnalysisResult.Span(s.label().replace("overhang", "cantilever"), s.from(), s.to()));
+            spans.replaceAll(s -> new AnalysisResult.Span(s.label().replace("overhang", "cantilever"), s.from(), s.to(), true));
         }
         return spans;
     }

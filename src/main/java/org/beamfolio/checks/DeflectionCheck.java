@@ -10,8 +10,7 @@ import org.beamfolio.analysis.Field;
 import org.beamfolio.analysis.Patterns;
 import org.beamfolio.model.DeflectionLimit;
 import org.beamfolio.model.SupportKind;
-import org.beamfolio.results.CheckOutcome;
-import org.beamfolio.results.ReportUnits;
+import org.beamfolio.units.ReportUnits;
 
 /**
  * Deflection under the sum of the named unfactored cases against the job's limits: a span ratio
@@ -32,6 +31,19 @@ final class DeflectionCheck implements Check {
     /** The worst deflection found and the loading that gives it. */
     private record Worst(Extreme extreme, Loading loading) {}
 
+    /** The limits are the engineer's, usually from IBC 2021 Table 1604.3 or the governing code. */
+    static final Authority AUTHORITY = new Authority("IBC 2021", "2021", "Table 1604.3 (limit given in the job)");
+
+    @Override
+    public String id() {
+        return "deflection";
+    }
+
+    @Override
+    public Authority authority() {
+        return AUTHORITY;
+    }
+
     @Override
     public List<CheckOutcome> run(AnalysisResult result) {
         ReportUnits u = ReportUnits.of(result.job().report().units());
@@ -44,8 +56,8 @@ final class DeflectionCheck implements Check {
             String measured = !springs ? "" : relative ? " relative to the supports' movement" : " (absolute, supports' movement included)";
             if (limit.spanRatio() != null) {
                 for (AnalysisResult.Span span : result.spans()) {
-                    boolean overhang = !span.label().startsWith("span "); // an overhang or a cantilever
-                    double effective = (overhang ? 2 : 1) * (span.to() - span.from());
+                    boolean overhang = span.overhang();
+                    double effective = span.limitLength();
                     double allowed = effective / limit.spanRatio();
                     Worst worst = worstIn(loadings, List.of(span), relative, supportsAt);
                     double demand = Math.abs(worst.extreme().value());
@@ -55,7 +67,8 @@ final class DeflectionCheck implements Check {
                                     + (overhang ? "2L" : "L") + "/" + trim(limit.spanRatio())
                                     + absoluteBeside(relative, worst, List.of(span), u),
                             u.deflection().fromSi(demand), u.deflection().fromSi(allowed), demand / allowed,
-                            demand <= allowed, worst.loading().name(), worst.extreme().at(), u.deflection().symbol()));
+                            demand <= allowed, worst.loading().name(), worst.extreme().at(), u.deflection().symbol(), CheckKind.DEFLECTION,
+                            AUTHORITY.citation()));
                 }
             } else {
                 Worst worst = worstIn(loadings, result.spans(), relative, supportsAt);
@@ -65,7 +78,8 @@ final class DeflectionCheck implements Check {
                                 + trim(u.deflection().fromSi(limit.maximum())) + " " + u.deflection().symbol()
                                 + absoluteBeside(relative, worst, result.spans(), u),
                         u.deflection().fromSi(demand), u.deflection().fromSi(limit.maximum()), demand / limit.maximum(),
-                        demand <= limit.maximum(), worst.loading().name(), worst.extreme().at(), u.deflection().symbol()));
+                        demand <= limit.maximum(), worst.loading().name(), worst.extreme().at(), u.deflection().symbol(),
+                        CheckKind.DEFLECTION, AUTHORITY.citation()));
             }
         }
         return out;

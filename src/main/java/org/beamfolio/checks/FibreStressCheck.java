@@ -4,8 +4,7 @@ import java.util.List;
 import org.beamfolio.analysis.AnalysisResult;
 import org.beamfolio.analysis.GoverningStresses;
 import org.beamfolio.analysis.StressDemand;
-import org.beamfolio.results.CheckOutcome;
-import org.beamfolio.results.ReportUnits;
+import org.beamfolio.units.ReportUnits;
 
 /**
  * Extreme fibre bending stress against the material's allowable, in tension and in compression:
@@ -24,8 +23,24 @@ final class FibreStressCheck implements Check {
         this.kind = kind;
     }
 
+    /** The flexure formula against the engineer's allowable: a rule of mechanics, the limit the engineer's. */
+    static final Authority AUTHORITY = new Authority("Mechanics of materials (common practice)", "", "f = M c / I");
+
+    @Override
+    public String id() {
+        return kind == Kind.TENSION ? "stress-tension" : "stress-compression";
+    }
+
+    @Override
+    public Authority authority() {
+        return AUTHORITY;
+    }
+
     @Override
     public List<CheckOutcome> run(AnalysisResult result) {
+        if (!result.job().stressCheck()) {
+            return List.of();
+        }
         GoverningStresses g = result.stresses();
         StressDemand d = kind == Kind.TENSION ? g.tension() : g.compression();
         if (d == null || !g.service()) {
@@ -37,8 +52,8 @@ final class FibreStressCheck implements Check {
         boolean hogging = d.topFibre() == (kind == Kind.TENSION);
         String fibre = (d.topFibre() ? "top" : "bottom") + " fibre, " + (hogging ? "hogging" : "sagging") + " moment";
         double ratio = d.demand() / d.allowable();
-        return List.of(new CheckOutcome("stress-" + what, "Extreme fibre bending stress in " + what + ", f = M c / I (" + fibre
+        return List.of(new CheckOutcome(id(), "Extreme fibre bending stress in " + what + ", f = M c / I (" + fibre
                 + "), against the allowable", u.stress().fromSi(d.demand()), u.stress().fromSi(d.allowable()), ratio, ratio <= 1,
-                d.combination().name(), d.at(), u.stress().symbol()));
+                d.combination().name(), d.at(), u.stress().symbol(), CheckKind.STRESS, AUTHORITY.citation()));
     }
 }

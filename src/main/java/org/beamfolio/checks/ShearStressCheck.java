@@ -4,8 +4,7 @@ import java.util.List;
 import org.beamfolio.analysis.AnalysisResult;
 import org.beamfolio.analysis.GoverningStresses;
 import org.beamfolio.analysis.StressDemand;
-import org.beamfolio.results.CheckOutcome;
-import org.beamfolio.results.ReportUnits;
+import org.beamfolio.units.ReportUnits;
 
 /**
  * Shear stress, f_v = V Q / (I t) (the shear formula of elementary beam theory), at the neutral
@@ -15,8 +14,23 @@ import org.beamfolio.results.ReportUnits;
  * A section without Q or t is not checked.
  */
 final class ShearStressCheck implements Check {
+    static final Authority AUTHORITY = new Authority("Mechanics of materials (common practice)", "", "f_v = V Q / (I t)");
+
+    @Override
+    public String id() {
+        return "stress-shear";
+    }
+
+    @Override
+    public Authority authority() {
+        return AUTHORITY;
+    }
+
     @Override
     public List<CheckOutcome> run(AnalysisResult result) {
+        if (!result.job().stressCheck()) {
+            return List.of();
+        }
         GoverningStresses g = result.stresses();
         StressDemand d = g.shear();
         if (d == null || !g.service()) {
@@ -25,8 +39,8 @@ final class ShearStressCheck implements Check {
         ReportUnits u = ReportUnits.of(result.job().report().units());
         double ratio = d.demand() / d.allowable();
         String cut = Double.isNaN(d.cutHeight()) ? "at the neutral axis" : "at the flange-to-web junction";
-        return List.of(new CheckOutcome("stress-shear", "Shear stress " + cut + ", f_v = V Q / (I t), against the allowable",
+        return List.of(new CheckOutcome(id(), "Shear stress " + cut + ", f_v = V Q / (I t), against the allowable",
                 u.stress().fromSi(d.demand()), u.stress().fromSi(d.allowable()), ratio, ratio <= 1, d.combination().name(),
-                d.at(), u.stress().symbol()));
+                d.at(), u.stress().symbol(), CheckKind.STRESS, AUTHORITY.citation()));
     }
 }

@@ -14,8 +14,10 @@ import org.beamfolio.checks.Checks;
 import org.beamfolio.job.Diagnostic;
 import org.beamfolio.job.JobReader;
 import org.beamfolio.job.JobReading;
+import org.beamfolio.job.RevisionInputs;
 import org.beamfolio.report.PackageRenderer;
-import org.beamfolio.results.CheckOutcome;
+import org.beamfolio.checks.CheckOutcome;
+import org.beamfolio.report.PreviousRevision;
 import org.beamfolio.results.ResultsWriter;
 
 /**
@@ -129,8 +131,9 @@ final class Pipeline {
         byte[] document;
         try {
             byte[] json = ResultsWriter.write(solved.result(), solved.checks()).getBytes(StandardCharsets.UTF_8);
-            document = renderer.render(solved.result(), solved.checks(), before == null ? null : before.result(),
-                    before == null ? List.of() : before.checks(), archival);
+            PreviousRevision previousRevision = before == null ? null : new PreviousRevision(before.result(), before.checks(),
+                    RevisionInputs.between(before.result().job().sourceText(), solved.result().job().sourceText()));
+            document = renderer.render(solved.result(), solved.checks(), previousRevision, archival);
             Files.createDirectories(outDir);
             List<Path> targets = new ArrayList<>(List.of(results, pdf));
             List<byte[]> contents = new ArrayList<>(List.of(json, document));

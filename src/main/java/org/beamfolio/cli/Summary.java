@@ -8,8 +8,8 @@ import org.beamfolio.analysis.Extremes;
 import org.beamfolio.analysis.StressDemand;
 import org.beamfolio.model.Support;
 import org.beamfolio.units.Numbers;
-import org.beamfolio.results.CheckOutcome;
-import org.beamfolio.results.ReportUnits;
+import org.beamfolio.checks.CheckOutcome;
+import org.beamfolio.units.ReportUnits;
 import org.beamfolio.units.Unit;
 
 /** The one-screen terminal summary that {@code check} prints for a job. */

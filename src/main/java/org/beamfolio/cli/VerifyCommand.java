@@ -5,7 +5,7 @@ import java.io.PrintWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
-import org.beamfolio.report.pdf.ChecksFlag;
+import org.beamfolio.checks.ChecksVerdict;
 import org.beamfolio.seal.SealException;
 import org.beamfolio.seal.Verifier;
 import picocli.CommandLine;
@@ -60,7 +60,7 @@ final class VerifyCommand implements Callable<Integer> {
         if (flag == null) {
             return "not recorded in the package";
         }
-        if (ChecksFlag.failing(flag)) {
+        if (ChecksVerdict.failing(flag)) {
             return "FAIL, the package has checks that do not meet their limits: " + flag.substring("fail: ".length());
         }
         return flag.equals("pass") ? "every check meets its limit" : "no checks were requested";

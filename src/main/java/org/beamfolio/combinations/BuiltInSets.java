@@ -9,6 +9,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
+import org.beamfolio.model.Purpose;
 
 /**
  * The built-in combination sets of format 1. The factors are transcribed from the standards
@@ -40,14 +41,14 @@ public final class BuiltInSets {
         CombinationTemplate.Term roof = anyOf(choice(1, "Lr"), choice(0.7, "S"), choice(1, "R"));
         CombinationTemplate.Term roof75 = anyOf(choice(0.75, "Lr"), choice(0.525, "S", "0.75(0.7S)"), choice(0.75, "R"));
         List<CombinationTemplate> t = List.of(
-                new CombinationTemplate(s + "(1)", List.of(term(1, "D"))),
-                new CombinationTemplate(s + "(2)", List.of(term(1, "D"), term(1, "L"))),
-                new CombinationTemplate(s + "(3)", List.of(term(1, "D"), roof)),
-                new CombinationTemplate(s + "(4)", List.of(term(1, "D"), term(0.75, "L"), roof75)),
-                new CombinationTemplate(s + "(5)", List.of(term(1, "D"), term(0.6, "W"))),
+                new CombinationTemplate(s + "(1)", List.of(term(1, "D")), Purpose.ALLOWABLE_STRESS),
+                new CombinationTemplate(s + "(2)", List.of(term(1, "D"), term(1, "L")), Purpose.ALLOWABLE_STRESS),
+                new CombinationTemplate(s + "(3)", List.of(term(1, "D"), roof), Purpose.ALLOWABLE_STRESS),
+                new CombinationTemplate(s + "(4)", List.of(term(1, "D"), term(0.75, "L"), roof75), Purpose.ALLOWABLE_STRESS),
+                new CombinationTemplate(s + "(5)", List.of(term(1, "D"), term(0.6, "W")), Purpose.ALLOWABLE_STRESS),
                 new CombinationTemplate(s + "(6)", List.of(term(1, "D"), term(0.75, "L"),
-                        new CombinationTemplate.Term(List.of(choice(0.45, "W", "0.75(0.6W)"))), roof75)),
-                new CombinationTemplate(s + "(7)", List.of(term(0.6, "D"), term(0.6, "W"))));
+                        new CombinationTemplate.Term(List.of(choice(0.45, "W", "0.75(0.6W)"))), roof75), Purpose.ALLOWABLE_STRESS),
+                new CombinationTemplate(s + "(7)", List.of(term(0.6, "D"), term(0.6, "W")), Purpose.ALLOWABLE_STRESS));
         return new CombinationSet(ASCE7_ASD, "ASCE/SEI 7-22, section 2.4.1, basic combinations (allowable stress design)",
                 CombinationSet.Purpose.ALLOWABLE_STRESS, t, Set.of("D", "L", "Lr", "S", "R", "W"));
     }
@@ -57,13 +58,13 @@ public final class BuiltInSets {
         String s = "ASCE/SEI 7-22 2.3.1 ";
         CombinationTemplate.Term roofHalf = anyOf(choice(0.5, "Lr"), choice(0.5, "S"), choice(0.5, "R"));
         List<CombinationTemplate> t = List.of(
-                new CombinationTemplate(s + "(1)", List.of(term(1.4, "D"))),
-                new CombinationTemplate(s + "(2)", List.of(term(1.2, "D"), term(1.6, "L"), roofHalf)),
+                new CombinationTemplate(s + "(1)", List.of(term(1.4, "D")), Purpose.STRENGTH),
+                new CombinationTemplate(s + "(2)", List.of(term(1.2, "D"), term(1.6, "L"), roofHalf), Purpose.STRENGTH),
                 new CombinationTemplate(s + "(3)", List.of(term(1.2, "D"),
                         anyOf(choice(1.6, "Lr"), choice(1.6, "S"), choice(1.6, "R")),
-                        anyOf(choice(1, "L"), choice(0.5, "W")))),
-                new CombinationTemplate(s + "(4)", List.of(term(1.2, "D"), term(1.0, "W"), term(1, "L"), roofHalf)),
-                new CombinationTemplate(s + "(5)", List.of(term(0.9, "D"), term(1.0, "W"))));
+                        anyOf(choice(1, "L"), choice(0.5, "W"))), Purpose.STRENGTH),
+                new CombinationTemplate(s + "(4)", List.of(term(1.2, "D"), term(1.0, "W"), term(1, "L"), roofHalf), Purpose.STRENGTH),
+                new CombinationTemplate(s + "(5)", List.of(term(0.9, "D"), term(1.0, "W")), Purpose.STRENGTH));
         return new CombinationSet(ASCE7_LRFD, "ASCE/SEI 7-22, section 2.3.1, basic combinations (strength design)",
                 CombinationSet.Purpose.STRENGTH, t, Set.of("D", "L", "Lr", "S", "R", "W"));
     }
@@ -78,7 +79,7 @@ public final class BuiltInSets {
         Map<String, Double> psi0 = Map.of("L", 0.7, "Lr", 0.0, "S", 0.5, "W", 0.6);
         List<String> variables = List.of("L", "Lr", "S", "W");
         List<CombinationTemplate> t = new ArrayList<>();
-        t.add(new CombinationTemplate("EN 1990 (6.10)", List.of(term(1.35, "D"))));
+        t.add(new CombinationTemplate("EN 1990 (6.10)", List.of(term(1.35, "D")), Purpose.STRENGTH));
         for (String lead : variables) {
             List<CombinationTemplate.Term> terms = new ArrayList<>();
             terms.add(term(1.35, "D"));
@@ -90,7 +91,7 @@ public final class BuiltInSets {
                             "1.5(" + psi0.get(other) + ")" + other))));
                 }
             }
-            t.add(new CombinationTemplate("EN 1990 (6.10), " + lead + " leading", terms));
+            t.add(new CombinationTemplate("EN 1990 (6.10), " + lead + " leading", terms, Purpose.STRENGTH));
         }
         for (String lead : variables) {
             List<CombinationTemplate.Term> terms = new ArrayList<>();
@@ -101,7 +102,7 @@ public final class BuiltInSets {
                     terms.add(term(psi0.get(other), other));
                 }
             }
-            t.add(new CombinationTemplate("EN 1990 (6.14b) characteristic, " + lead + " leading", terms));
+            t.add(new CombinationTemplate("EN 1990 (6.14b) characteristic, " + lead + " leading", terms, Purpose.SERVICE));
         }
         return new CombinationSet(EN1990, "EN 1990:2002, expression (6.10) with recommended factors "
                 + "(Tables A1.1, A1.2(B)), and the characteristic combination (6.14b)",

@@ -77,7 +77,7 @@ public record CombinationSet(String id, String source, Purpose purpose, List<Com
                 if (duplicate || factors.isEmpty() || onlyDeadLeft) {
                     dropped.add(template.reference() + (missing ? ": the job has none of its variable cases" : ": same as an earlier combination"));
                 } else {
-                    result.add(new Combination(name, factors));
+                    result.add(new Combination(name, factors, template.purpose()));
                     references.add(template.reference());
                 }
             }

@@ -1,6 +1,7 @@
 package org.beamfolio.combinations;
 
 import java.util.List;
+import org.beamfolio.model.Purpose;
 
 /**
  * One combination as a standard writes it: a sum of terms, each term a factor on one case or on
@@ -8,7 +9,7 @@ import java.util.List;
  *
  * @param reference where the combination stands, e.g. "ASCE/SEI 7-22 2.4.1 (3)"
  */
-public record CombinationTemplate(String reference, List<Term> terms) {
+public record CombinationTemplate(String reference, List<Term> terms, Purpose purpose) {
     public CombinationTemplate {
         terms = List.copyOf(terms);
     }

@@ -11,7 +11,7 @@ import org.beamfolio.analysis.Response;
 import org.beamfolio.model.Load;
 import org.beamfolio.model.Material;
 import org.beamfolio.model.Support;
-import org.beamfolio.results.ReportUnits;
+import org.beamfolio.units.ReportUnits;
 import org.beamfolio.units.Unit;
 import org.beamfolio.units.Units;
 
@@ -46,7 +46,7 @@ final class DeflectionSteps {
         this.n = n;
         this.steps = steps;
         ReportUnits u = ReportUnits.of(result.job().report().units());
-        boolean us = u.length().symbol().equals("ft");
+        boolean us = u.us();
         small = u.sectionLength();
         force = us ? Units.of("lb") : Units.of("N");
         stress = us ? Units.of("psi") : Units.of("MPa");
@@ -73,7 +73,7 @@ final class DeflectionSteps {
     /** The handbook closed forms at the middle of a simple span, when they apply. */
     private boolean closedForm(AnalysisResult.Span span, double mid, double value) {
         List<Support> supports = result.job().beam().supports();
-        if (Derivations.methodFor(result) != Derivations.Method.STATICS || !span.label().startsWith("span ")
+        if (Derivations.methodFor(result) != Derivations.Method.STATICS || span.overhang()
                 || supports.get(0).at() != span.from() || supports.get(1).at() != span.to()) {
             return false;
         }

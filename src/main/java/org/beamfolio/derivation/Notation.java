@@ -1,7 +1,7 @@
 package org.beamfolio.derivation;
 
 import org.beamfolio.analysis.AnalysisResult;
-import org.beamfolio.results.ReportUnits;
+import org.beamfolio.units.ReportUnits;
 import org.beamfolio.units.Unit;
 
 /** Report units for the working, and their symbols as printed. */

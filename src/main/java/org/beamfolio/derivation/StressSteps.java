@@ -4,7 +4,7 @@ import java.util.List;
 import org.beamfolio.analysis.AnalysisResult;
 import org.beamfolio.analysis.GoverningStresses;
 import org.beamfolio.analysis.StressDemand;
-import org.beamfolio.results.ReportUnits;
+import org.beamfolio.units.ReportUnits;
 import org.beamfolio.section.SectionProperties;
 import org.beamfolio.units.Unit;
 
@@ -23,7 +23,7 @@ public final class StressSteps {
     private StressSteps(AnalysisResult result) {
         this.result = result;
         this.u = ReportUnits.of(result.job().report().units());
-        this.us = u.length().symbol().equals("ft");
+        this.us = u.us();
     }
 
     public static List<Step> of(AnalysisResult result) {

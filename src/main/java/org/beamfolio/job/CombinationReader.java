@@ -14,6 +14,7 @@ import org.beamfolio.model.Beam;
 import org.beamfolio.model.Combination;
 import org.beamfolio.model.DeflectionLimit;
 import org.beamfolio.model.Load;
+import org.beamfolio.model.Location;
 import org.beamfolio.units.Dimension;
 import org.beamfolio.units.Suggest;
 

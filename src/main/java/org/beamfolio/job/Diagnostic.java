@@ -1,5 +1,7 @@
 package org.beamfolio.job;
 
+import org.beamfolio.model.Location;
+
 /**
  * One thing wrong with a job file, with where it is. Rendered as
  * {@code job.yaml:12:7: beam.length: must be positive, got -20 ft} and the offending line with a

@@ -18,6 +18,7 @@ import org.beamfolio.catalogue.SteelGrade;
 import org.beamfolio.model.Beam;
 import org.beamfolio.model.Job;
 import org.beamfolio.model.Load;
+import org.beamfolio.model.Location;
 import org.beamfolio.model.Material;
 import org.beamfolio.model.Project;
 import org.beamfolio.model.ReportSettings;
@@ -26,6 +27,7 @@ import org.beamfolio.model.TimberDesign;
 import org.beamfolio.model.SteelDesign;
 import org.beamfolio.units.Dimension;
 import org.beamfolio.units.Lengths;
+import org.beamfolio.units.UnitSystem;
 
 /**
  * Reads a format 1 job file into a validated {@link Job}, or into the complete list of what is
@@ -146,7 +148,7 @@ public final class JobReader {
             }
             Project project = ProjectReader.read(context, top.required("project"));
             ReportSettings report = ProjectReader.report(context, top.optional("report"), JobUnits.of(top.optional("beam")));
-            context.writeLengthsAs(report.units() == ReportSettings.UnitSystem.SI ? Lengths.Style.METRES : Lengths.Style.FEET_AND_INCHES);
+            context.writeLengthsAs(report.units() == UnitSystem.SI ? Lengths.Style.METRES : Lengths.Style.FEET_AND_INCHES);
             YamlNode materialsNode = top.required("materials");
             Map<String, Material> materials = materials(materialsNode);
             YamlNode sectionsNode = top.required("sections");

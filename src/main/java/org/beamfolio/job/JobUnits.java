@@ -1,8 +1,8 @@
 package org.beamfolio.job;
 
-import org.beamfolio.model.ReportSettings.UnitSystem;
 import org.beamfolio.units.Dimension;
 import org.beamfolio.units.QuantityParser;
+import org.beamfolio.units.UnitSystem;
 
 /**
  * The unit system a job is written in, for a job that does not say (no {@code report.units}): the

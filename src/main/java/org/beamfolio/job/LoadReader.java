@@ -8,6 +8,7 @@ import org.beamfolio.loads.TakeOff;
 import org.beamfolio.loads.Tributary;
 import org.beamfolio.model.Beam;
 import org.beamfolio.model.Load;
+import org.beamfolio.model.Location;
 import org.beamfolio.units.Dimension;
 
 /**

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import org.beamfolio.model.Project;
 import org.beamfolio.model.ReportSettings;
+import org.beamfolio.units.UnitSystem;
 
 /** Reads the project block and the report settings. */
 final class ProjectReader {
@@ -59,8 +60,8 @@ final class ProjectReader {
     }
 
     /** The report settings; {@code units} when the job does not give report.units. */
-    static ReportSettings report(ReadContext context, YamlNode node, ReportSettings.UnitSystem unitsByDefault) {
-        ReportSettings.UnitSystem units = unitsByDefault;
+    static ReportSettings report(ReadContext context, YamlNode node, UnitSystem unitsByDefault) {
+        UnitSystem units = unitsByDefault;
         ReportSettings.Paper paper = ReportSettings.Paper.LETTER;
         if (node == null) {
             return new ReportSettings(units, paper);
@@ -73,7 +74,7 @@ final class ProjectReader {
         if (u != null) {
             String value = context.choice(u, f.path("units"), List.of("US", "SI"));
             if (value != null) {
-                units = ReportSettings.UnitSystem.valueOf(value);
+                units = UnitSystem.valueOf(value);
             }
         }
         YamlNode p = f.optional("paper");
@@ -88,7 +89,7 @@ final class ProjectReader {
         if (at != null) {
             String value = context.choice(at, f.path("positions"), List.of("decimal", "ft-in"));
             if ("ft-in".equals(value)) {
-                if (units == ReportSettings.UnitSystem.US) {
+                if (units == UnitSystem.US) {
                     positions = ReportSettings.Positions.FEET_INCHES;
                 } else {
                     context.error(at, f.path("positions"), "feet and inches need US units (report.units: US); SI positions print in m");

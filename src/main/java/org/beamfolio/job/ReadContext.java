@@ -5,6 +5,7 @@ import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Optional;
 import java.util.Set;
+import org.beamfolio.model.Location;
 import org.beamfolio.units.Dimension;
 import org.beamfolio.units.Lengths;
 import org.beamfolio.units.QuantityParser;

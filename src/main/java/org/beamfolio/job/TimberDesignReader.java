@@ -8,11 +8,10 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
 import org.beamfolio.combinations.BuiltInSets;
-import org.beamfolio.design.timber.AdjustedValues;
-import org.beamfolio.design.timber.LoadDuration;
-import org.beamfolio.design.timber.Temperature;
-import org.beamfolio.design.timber.TimberKind;
-import org.beamfolio.design.timber.TimberService;
+import org.beamfolio.model.timber.LoadDuration;
+import org.beamfolio.model.timber.Temperature;
+import org.beamfolio.model.timber.TimberKind;
+import org.beamfolio.model.timber.TimberService;
 import org.beamfolio.model.Beam;
 import org.beamfolio.model.Material;
 import org.beamfolio.model.Section;
@@ -204,8 +203,8 @@ final class TimberDesignReader {
         Map<String, Material> out = new LinkedHashMap<>();
         for (Map.Entry<String, Material> e : materials.entrySet()) {
             Material m = e.getValue();
-            out.put(e.getKey(), m.timber() == null ? m
-                    : m.withModulus(new AdjustedValues(m.timber(), design.service(), 1, 1).modulus().value()));
+            out.put(e.getKey(), m.timber() == null ? m : m.withModulus(m.timber().e()
+                    * org.beamfolio.model.timber.ServiceFactors.modulusFactor(m.timber(), design.service())));
         }
         return out;
     }

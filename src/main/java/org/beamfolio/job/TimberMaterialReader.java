@@ -1,9 +1,9 @@
 package org.beamfolio.job;
 
 import java.util.List;
-import org.beamfolio.design.timber.SizeClass;
-import org.beamfolio.design.timber.TimberKind;
-import org.beamfolio.design.timber.TimberValues;
+import org.beamfolio.model.timber.SizeClass;
+import org.beamfolio.model.timber.TimberKind;
+import org.beamfolio.model.timber.TimberValues;
 import org.beamfolio.model.Material;
 import org.beamfolio.units.Dimension;
 

@@ -3,6 +3,7 @@ package org.beamfolio.job;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import org.beamfolio.model.Location;
 
 /** A YAML node with the place it came from, so every message can point at it. */
 public sealed interface YamlNode permits YamlNode.Mapping, YamlNode.Sequence, YamlNode.Scalar {

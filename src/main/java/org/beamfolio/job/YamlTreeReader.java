@@ -11,6 +11,7 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import org.beamfolio.model.Location;
 import org.yaml.snakeyaml.LoaderOptions;
 
 /**

@@ -1,6 +1,6 @@
 package org.beamfolio.model;
 
-import org.beamfolio.job.Location;
+import org.beamfolio.model.Location;
 
 /** An internal moment release at {@code at} metres. */
 public record Hinge(double at, Location where) {}

@@ -1,6 +1,6 @@
 package org.beamfolio.model;
 
-import org.beamfolio.job.Location;
+import org.beamfolio.model.Location;
 
 /**
  * A load of one case. Forces are positive downward (gravity); couples positive counter-clockwise.

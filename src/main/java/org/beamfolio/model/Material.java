@@ -1,6 +1,6 @@
 package org.beamfolio.model;
 
-import org.beamfolio.design.timber.TimberValues;
+import org.beamfolio.model.timber.TimberValues;
 
 /**
  * A material: elastic modulus, optional weight density for self weight, optional allowable

@@ -1,6 +1,6 @@
 package org.beamfolio.model;
 
-import org.beamfolio.job.Location;
+import org.beamfolio.model.Location;
 
 /**
  * A support at {@code at} metres from the left end; {@code where} is its place in the job file.

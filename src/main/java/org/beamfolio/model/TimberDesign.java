@@ -3,9 +3,9 @@ package org.beamfolio.model;
 import java.util.Collections;
 import java.util.LinkedHashMap;
 import java.util.Map;
-import org.beamfolio.design.timber.LoadDuration;
-import org.beamfolio.design.timber.TimberService;
-import org.beamfolio.job.Location;
+import org.beamfolio.model.timber.LoadDuration;
+import org.beamfolio.model.timber.TimberService;
+import org.beamfolio.model.Location;
 
 /**
  * Timber design asked for by the job ({@code design.timber}): the standard, the service

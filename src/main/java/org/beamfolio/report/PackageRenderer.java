@@ -19,7 +19,7 @@ import org.beamfolio.analysis.AnalysisResult;
 import org.beamfolio.report.drawing.Chart;
 import org.beamfolio.report.drawing.Drawing;
 import org.beamfolio.report.pdf.PdfRenderer;
-import org.beamfolio.results.CheckOutcome;
+import org.beamfolio.checks.CheckOutcome;
 
 /**
  * The report stage's entry point: gathers the {@link ReportModel}, merges it into the FreeMarker
@@ -108,22 +108,19 @@ public final class PackageRenderer {
     }
 
     public byte[] render(AnalysisResult result, List<CheckOutcome> checks) {
-        return render(result, checks, null, List.of());
+        return render(result, checks, null, true);
     }
 
-    /** The package, with a revision-delta sheet when a previous revision's results are given. */
-    public byte[] render(AnalysisResult result, List<CheckOutcome> checks, AnalysisResult previous, List<CheckOutcome> previousChecks) {
-        return render(result, checks, previous, previousChecks, true);
-    }
-
-    /** @param archival PDF/A-3b (the default) or a plain PDF */
-    public byte[] render(AnalysisResult result, List<CheckOutcome> checks, AnalysisResult previous, List<CheckOutcome> previousChecks,
-                         boolean archival) {
-        ReportModelBuilder.Built built = new ReportModelBuilder(result).build(checks, previous, previousChecks);
+    /**
+     * @param previous an earlier revision, for a revision-delta sheet, or null
+     * @param archival PDF/A-3b (the default) or a plain PDF
+     */
+    public byte[] render(AnalysisResult result, List<CheckOutcome> checks, PreviousRevision previous, boolean archival) {
+        ReportModelBuilder.Built built = new ReportModelBuilder(result).build(checks, previous);
         String xhtml = xhtml(built.model());
         PdfRenderer.Attachment job = new PdfRenderer.Attachment(result.job().name() + ".yaml",
                 result.job().sourceBytes(), "Job file of this calculation package");
-        String flag = org.beamfolio.report.pdf.ChecksFlag.of(!checks.isEmpty(), checks.stream().filter(c -> !c.pass()).map(CheckOutcome::id).toList());
+        String flag = org.beamfolio.checks.ChecksVerdict.of(checks);
         return ready(pdf).render(xhtml, built.drawings(), job, result.job().project().date(), archival, result.job().project().title(),
                 flag);
     }

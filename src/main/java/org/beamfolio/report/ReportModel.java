@@ -21,7 +21,21 @@ public record ReportModel(Sheet sheet, Cover cover, Revision revision, Basis bas
     /** A label and its value (or a contents entry: title and anchor). */
     public record Row(String label, String value) {}
 
-    public record Table(List<String> header, List<List<String>> rows) {}
+    /**
+     * A table of display text. {@code failing} flags each row whose check does not meet its limit,
+     * and {@code resultColumn} is the column that states it (-1 when the table states none).
+     */
+    public record Table(List<String> header, List<List<String>> rows, List<Boolean> failing, int resultColumn) {
+        public Table {
+            header = List.copyOf(header);
+            rows = List.copyOf(rows);
+            failing = List.copyOf(failing);
+        }
+
+        public Table(List<String> header, List<List<String>> rows) {
+            this(header, rows, java.util.Collections.nCopies(rows.size(), false), -1);
+        }
+    }
 
     public record Figure(String id, String caption, String height) {}
 

@@ -17,8 +17,8 @@ import org.beamfolio.model.Material;
 import org.beamfolio.model.Project;
 import org.beamfolio.report.drawing.Drawing;
 import org.beamfolio.report.drawing.SignConventionSketch;
-import org.beamfolio.results.CheckOutcome;
-import org.beamfolio.results.ReportUnits;
+import org.beamfolio.checks.CheckOutcome;
+import org.beamfolio.units.ReportUnits;
 import org.beamfolio.results.Version;
 
 /**
@@ -39,11 +39,11 @@ final class ReportModelBuilder {
     }
 
     Built build(List<CheckOutcome> checks) {
-        return build(checks, null, List.of());
+        return build(checks, null);
     }
 
     /** With a previous revision of the job (or null), the package gets a revision-delta sheet. */
-    Built build(List<CheckOutcome> checks, AnalysisResult previous, List<CheckOutcome> previousChecks) {
+    Built build(List<CheckOutcome> checks, PreviousRevision previous) {
         Job job = result.job();
         Project p = job.project();
         ReportModel.Sheet sheet = new ReportModel.Sheet(p.title(), p.number(), p.subject(), p.revision(), p.preparedBy(),
@@ -56,7 +56,7 @@ final class ReportModelBuilder {
         ReportModel.Envelope envelope = new CombinationPart(result, t, drawings).envelope();
         ReportModel.Stresses stresses = new StressPart(result, t).build();
         ReportModel.Revision revision = previous == null ? null
-                : new RevisionPart(result, checks, previous, previousChecks, t).build();
+                : new RevisionPart(result, checks, previous.result(), previous.checks(), previous.inputs(), t).build();
         ReportModel.SteelSheet steel = new SteelPart(result, t).build();
         ReportModel model = new ReportModel(sheet, cover(checks, analyses, revision != null, steel != null), revision, basis(),
                 loading.build(), analyses, envelope, new ReactionsPart(result, t).build(), stresses, checks(checks), cautions(),
@@ -97,7 +97,7 @@ final class ReportModelBuilder {
     private ReportModel.Cover cover(List<CheckOutcome> checks, List<ReportModel.CombinationSheet> analyses, boolean revision,
                                     boolean steel) {
         Job job = result.job();
-        long spans = result.spans().stream().filter(s -> s.label().startsWith("span ")).count();
+        long spans = result.spans().stream().filter(s -> !s.overhang()).count();
         String layout = result.spans().stream().anyMatch(s -> s.label().contains("cantilever")) ? "cantilever"
                 : (spans == 1 ? "single-span" : spans + "-span continuous")
                         + (result.spans().stream().anyMatch(s -> s.label().contains("overhang")) ? " beam with overhang" : " beam");
@@ -189,11 +189,11 @@ final class ReportModelBuilder {
                 "Supports are points; springs are linear. Support settlement is not included unless modelled by a spring.",
                 job.steelDesign() != null ? steelScope() + " Not checked: connections, vibration, fire, fatigue and second-order effects."
                         : "Not checked unless shown: lateral-torsional and local buckling, connections, bearing and web crippling, vibration, fire, fatigue, creep and second-order effects.");
-        List<String> materialHeader = List.of("Material", "E (" + (u.stress().symbol().equals("psi") ? "ksi" : "MPa") + ")",
+        List<String> materialHeader = List.of("Material", "E (" + (u.us() ? "ksi" : "MPa") + ")",
                 "Density", "Allowable tension", "Allowable compression", "Allowable shear", "Source");
         List<List<String>> materialRows = new ArrayList<>();
-        org.beamfolio.units.Unit modulus = org.beamfolio.units.Units.of(u.stress().symbol().equals("psi") ? "ksi" : "MPa");
-        org.beamfolio.units.Unit density = org.beamfolio.units.Units.of(u.stress().symbol().equals("psi") ? "pcf" : "kN/m^3");
+        org.beamfolio.units.Unit modulus = org.beamfolio.units.Units.of(u.us() ? "ksi" : "MPa");
+        org.beamfolio.units.Unit density = org.beamfolio.units.Units.of(u.us() ? "pcf" : "kN/m^3");
         for (Material m : job.materials().values()) {
             materialRows.add(List.of(m.id(), t.plain(m.elasticModulus(), modulus),
                     m.weightDensity() == null ? "not given" : t.q(m.weightDensity(), density),
@@ -209,17 +209,19 @@ final class ReportModelBuilder {
 
     private ReportModel.Checks checks(List<CheckOutcome> checks) {
         List<List<String>> rows = new ArrayList<>();
+        List<Boolean> failing = new ArrayList<>();
         for (CheckOutcome c : checks) {
-            rows.add(List.of(c.id(), c.description(), Numbers.format(c.demand(), c.unit()), Numbers.format(c.limit(), c.unit()),
+            rows.add(List.of(c.id(), c.description(), c.clause(), Numbers.format(c.demand(), c.unit()), Numbers.format(c.limit(), c.unit()),
                     Numbers.format(c.ratio()), c.pass() ? "meets" : "EXCEEDS", c.combination(), t.len(c.at())));
+            failing.add(!c.pass());
         }
         boolean allPass = checks.stream().allMatch(CheckOutcome::pass);
         String governing = checks.stream().max(java.util.Comparator.comparingDouble(CheckOutcome::ratio))
                 .map(c -> "Governing ratio " + Numbers.format(c.ratio()) + ": " + c.id() + " under " + c.combination() + " at "
                         + t.len(c.at()) + ". " + (allPass ? "Every check meets its limit." : "At least one check EXCEEDS its limit."))
                 .orElse("No checks were requested in the job file.");
-        return new ReportModel.Checks(new ReportModel.Table(List.of("Check", "What is checked", "Demand", "Limit", "Ratio",
-                "Result", "Combination", "At"), rows), governing, allPass, !checks.isEmpty(), failing(checks));
+        return new ReportModel.Checks(new ReportModel.Table(List.of("Check", "What is checked", "Basis", "Demand", "Limit", "Ratio",
+                "Result", "Combination", "At"), rows, failing, 6), governing, allPass, !checks.isEmpty(), failing(checks));
     }
 
     /** What the cover and the checks sheet state for each check that does not meet its limit. */

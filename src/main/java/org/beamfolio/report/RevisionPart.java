@@ -3,13 +3,12 @@ package org.beamfolio.report;
 import java.util.ArrayList;
 import java.util.LinkedHashSet;
 import java.util.List;
-import java.util.Map;
 import java.util.Set;
 import org.beamfolio.analysis.AnalysisResult;
 import org.beamfolio.analysis.Extreme;
 import org.beamfolio.analysis.Extremes;
-import org.beamfolio.job.Flattened;
-import org.beamfolio.results.CheckOutcome;
+import org.beamfolio.checks.CheckOutcome;
+import org.beamfolio.model.InputChange;
 import org.beamfolio.units.Numbers;
 import org.beamfolio.units.Unit;
 
@@ -23,28 +22,24 @@ final class RevisionPart {
     private final List<CheckOutcome> nowChecks;
     private final AnalysisResult before;
     private final List<CheckOutcome> beforeChecks;
+    private final List<InputChange> inputChanges;
     private final Texts t;
 
-    RevisionPart(AnalysisResult now, List<CheckOutcome> nowChecks, AnalysisResult before, List<CheckOutcome> beforeChecks, Texts t) {
+    RevisionPart(AnalysisResult now, List<CheckOutcome> nowChecks, AnalysisResult before, List<CheckOutcome> beforeChecks,
+                 List<InputChange> inputChanges, Texts t) {
         this.now = now;
         this.nowChecks = nowChecks;
         this.before = before;
         this.beforeChecks = beforeChecks;
+        this.inputChanges = List.copyOf(inputChanges);
         this.t = t;
     }
 
     ReportModel.Revision build() {
-        Map<String, String> a = Flattened.of(before.job().sourceText());
-        Map<String, String> b = Flattened.of(now.job().sourceText());
-        Set<String> keys = new LinkedHashSet<>(a.keySet());
-        keys.addAll(b.keySet());
         List<List<String>> inputs = new ArrayList<>();
-        for (String key : keys) {
-            String old = a.get(key);
-            String neu = b.get(key);
-            if (old == null || neu == null || !old.equals(neu)) {
-                inputs.add(List.of(key, old == null ? "(not given)" : old, neu == null ? "(removed)" : neu));
-            }
+        for (InputChange change : inputChanges) {
+            inputs.add(List.of(change.key(), change.before() == null ? "(not given)" : change.before(),
+                    change.now() == null ? "(removed)" : change.now()));
         }
         List<List<String>> results = new ArrayList<>();
         Extremes x = before.envelope();

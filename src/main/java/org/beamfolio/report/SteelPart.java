@@ -12,7 +12,7 @@ import org.beamfolio.design.steel.Equation;
 import org.beamfolio.design.steel.LimitStateResult;
 import org.beamfolio.design.steel.Method;
 import org.beamfolio.design.steel.Slenderness;
-import org.beamfolio.design.steel.SteelChecks;
+import org.beamfolio.checks.steel.SteelChecks;
 import org.beamfolio.design.steel.SteelDesignWork;
 import org.beamfolio.design.steel.SteelMember;
 import org.beamfolio.design.steel.Strength;
@@ -35,7 +35,7 @@ final class SteelPart {
     SteelPart(AnalysisResult result, Texts t) {
         this.result = result;
         this.t = t;
-        this.si = result.job().report().units() == ReportSettings.UnitSystem.SI;
+        this.si = result.job().report().units() == org.beamfolio.units.UnitSystem.SI;
     }
 
     /** The sheet, or null when the job asks for no steel design. */

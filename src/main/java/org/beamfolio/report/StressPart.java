@@ -2,10 +2,10 @@ package org.beamfolio.report;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import java.util.Map;
 import org.beamfolio.analysis.AnalysisResult;
 import org.beamfolio.model.Section;
+import org.beamfolio.model.SectionShape;
 import org.beamfolio.section.SectionProperties;
 
 /**
@@ -37,15 +37,21 @@ final class StressPart {
     }
 
     static String shapeName(Section section) {
-        if (section.shape() instanceof org.beamfolio.model.SectionShape.Catalogued c) {
-            return c.shape().designation() + (section.flip() ? ", flipped" : "");
+        SectionShape shape = section.shape();
+        String name;
+        if (shape instanceof SectionShape.Catalogued c) {
+            name = c.shape().designation();
+        } else if (shape instanceof SectionShape.IBeam) {
+            name = "I shape";
+        } else if (shape instanceof SectionShape.Given) {
+            name = "given properties";
+        } else if (shape instanceof SectionShape.Plates) {
+            name = "built-up plates";
+        } else {
+            name = shape instanceof SectionShape.Rectangle ? "rectangle" : shape instanceof SectionShape.Circle ? "circle"
+                    : shape instanceof SectionShape.Tube ? "tube" : shape instanceof SectionShape.Pipe ? "pipe"
+                    : shape instanceof SectionShape.Tee ? "tee" : "channel";
         }
-        String name = switch (section.shape().getClass().getSimpleName()) {
-            case "IBeam" -> "I shape";
-            case "Given" -> "given properties";
-            case "Plates" -> "built-up plates";
-            default -> section.shape().getClass().getSimpleName().toLowerCase(Locale.ROOT);
-        };
         return name + (section.flip() ? ", flipped" : "");
     }
 

@@ -21,10 +21,10 @@ final class TakeOffPart {
     private final Unit pressure;
     private final Unit area;
 
-    TakeOffPart(TakeOff takeOff, ReportSettings.UnitSystem units, Texts t) {
+    TakeOffPart(TakeOff takeOff, org.beamfolio.units.UnitSystem units, Texts t) {
         this.takeOff = takeOff;
         this.t = t;
-        boolean us = units == ReportSettings.UnitSystem.US;
+        boolean us = units == org.beamfolio.units.UnitSystem.US;
         this.pressure = Units.of(us ? "psf" : "kPa");
         this.area = Units.of(us ? "ft^2" : "m^2");
     }

@@ -2,7 +2,7 @@ package org.beamfolio.report;
 
 import org.beamfolio.model.ReportSettings;
 import org.beamfolio.units.Numbers;
-import org.beamfolio.results.ReportUnits;
+import org.beamfolio.units.ReportUnits;
 import org.beamfolio.units.Unit;
 
 /** Quantities as the package prints them: rounded by {@link Numbers}, with their unit. */

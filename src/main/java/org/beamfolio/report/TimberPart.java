@@ -6,9 +6,9 @@ import org.beamfolio.analysis.AnalysisResult;
 import org.beamfolio.checks.timber.TimberBeamDesign;
 import org.beamfolio.checks.timber.TimberDesignResult;
 import org.beamfolio.design.timber.AdjustedValues;
-import org.beamfolio.design.timber.Factor;
-import org.beamfolio.design.timber.TimberKind;
-import org.beamfolio.design.timber.TimberValues;
+import org.beamfolio.model.timber.Factor;
+import org.beamfolio.model.timber.TimberKind;
+import org.beamfolio.model.timber.TimberValues;
 import org.beamfolio.model.TimberDesign;
 import org.beamfolio.units.Numbers;
 

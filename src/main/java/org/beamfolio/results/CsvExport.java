@@ -7,6 +7,7 @@ import org.beamfolio.analysis.CombinationResult;
 import org.beamfolio.analysis.Field;
 import org.beamfolio.analysis.Response;
 import org.beamfolio.analysis.Stresses;
+import org.beamfolio.units.ReportUnits;
 
 /**
  * Diagram ordinates as CSV, for a spreadsheet or another program: for every combination and for

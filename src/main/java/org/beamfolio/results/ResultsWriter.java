@@ -13,8 +13,10 @@ import org.beamfolio.analysis.Extreme;
 import org.beamfolio.analysis.Extremes;
 import org.beamfolio.analysis.ReactionEnvelope;
 import org.beamfolio.analysis.Response;
+import org.beamfolio.checks.CheckOutcome;
 import org.beamfolio.model.Support;
 import org.beamfolio.section.SectionProperties;
+import org.beamfolio.units.ReportUnits;
 import org.beamfolio.units.Unit;
 
 /**
@@ -115,20 +117,15 @@ public final class ResultsWriter {
             g.writeStringField("combination", check.combination());
             g.writeNumberField("at", u.length().fromSi(check.at()));
             g.writeStringField("unit", check.unit());
-            if (check.kind() != null) {
-                g.writeStringField("kind", check.kind());
-            }
-            if (check.clause() != null) {
-                g.writeStringField("clause", check.clause());
-            }
+            g.writeStringField("kind", check.kind().key());
+            g.writeStringField("clause", check.clause());
             if (check.limitState() != null) {
                 g.writeStringField("limit_state", check.limitState());
             }
-            if (!check.segment().isEmpty()) {
+            if (check.segment() != null) {
                 g.writeArrayFieldStart("segment");
-                for (double x : check.segment()) {
-                    g.writeNumber(u.length().fromSi(x));
-                }
+                g.writeNumber(u.length().fromSi(check.segment().from()));
+                g.writeNumber(u.length().fromSi(check.segment().to()));
                 g.writeEndArray();
             }
             if (!check.factors().isEmpty()) {

@@ -28,7 +28,7 @@ import java.util.Collections;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
-import org.beamfolio.report.pdf.ChecksFlag;
+import org.beamfolio.checks.ChecksVerdict;
 import org.bouncycastle.asn1.ASN1EncodableVector;
 import org.bouncycastle.asn1.DERSet;
 import org.bouncycastle.asn1.cms.Attribute;
@@ -74,7 +74,7 @@ public final class Sealer {
     public static Sealed seal(byte[] pdf, Path12 keystore, char[] password, Request request, Calendar now) throws SealException {
         String flag = checksFlag(pdf);
         List<String> warnings = new ArrayList<>();
-        if (ChecksFlag.failing(flag) && !request.acceptFailing()) {
+        if (ChecksVerdict.failing(flag) && !request.acceptFailing()) {
             throw new SealException("the package's checks do not all meet their limits (" + flag
                     + "); it is not sealed. Revise the design, or give --accept-failing to seal it marked as failing");
         }
@@ -115,7 +115,7 @@ public final class Sealer {
                 certificates.add((X509Certificate) c);
             }
             warnings.addAll(CertificateTrust.concerns(certificates, now.getTime()));
-            return new Sealed(sign(pdf, key, chain, request, now, ChecksFlag.failing(flag) ? flag : null), warnings);
+            return new Sealed(sign(pdf, key, chain, request, now, ChecksVerdict.failing(flag) ? flag : null), warnings);
         } catch (UnrecoverableKeyException e) {
             throw new SealException("the password does not open the key \"" + alias + "\"");
         } catch (GeneralSecurityException | IOException | com.lowagie.text.DocumentException e) {
@@ -123,11 +123,11 @@ public final class Sealer {
         }
     }
 
-    /** The package's {@link ChecksFlag}, or null when it has none. */
+    /** The package's {@link ChecksVerdict}, or null when it has none. */
     static String checksFlag(byte[] pdf) throws SealException {
         try {
             PdfReader reader = new PdfReader(pdf);
-            return ChecksFlag.read(reader.getTrailer().getAsDict(PdfName.INFO));
+            return ChecksEntry.read(reader.getTrailer().getAsDict(PdfName.INFO));
         } catch (IOException e) {
             throw new SealException("not a readable PDF: " + e.getMessage(), e);
         }
@@ -176,7 +176,7 @@ public final class Sealer {
             appearance.setVisibleSignature(new com.lowagie.text.Rectangle(size.getRight() - 220, size.getTop() - 260,
                     size.getRight() - 60, size.getTop() - 140), sheet, null);
         } else {
-            appearance.setVisibleSignature(org.beamfolio.report.drawing.SealBox.FIELD);
+            appearance.setVisibleSignature(org.beamfolio.model.PackageSeal.FIELD);
         }
         whiteGround(appearance);
         PdfSignature dictionary = new PdfSignature(PdfName.ADOBE_PPKLITE, new PdfName("ETSI.CAdES.detached"));

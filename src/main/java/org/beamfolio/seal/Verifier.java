@@ -15,7 +15,7 @@ import java.util.HexFormat;
 import java.util.List;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
-import org.beamfolio.report.pdf.ChecksFlag;
+import org.beamfolio.checks.ChecksVerdict;
 import org.bouncycastle.cert.X509CertificateHolder;
 import org.bouncycastle.cert.jcajce.JcaX509CertificateConverter;
 import org.bouncycastle.cms.CMSProcessableByteArray;
@@ -36,7 +36,7 @@ public final class Verifier {
 
     /** What verification found; {@code intact} is the overall verdict. */
     /**
-     * @param checksFlag the package's {@link ChecksFlag} ({@code pass}, {@code fail: ...}, {@code none}), null when it has none
+     * @param checksFlag the package's {@link ChecksVerdict} ({@code pass}, {@code fail: ...}, {@code none}), null when it has none
      * @param certificateConcerns why the seal's certificate is not vouched for by an authority the system trusts; empty when it is
      */
     public record Report(boolean sealed, boolean signatureValid, boolean coversWholeFile, String signer, String when,
@@ -56,7 +56,7 @@ public final class Verifier {
         } catch (IOException e) {
             throw new SealException("not a readable PDF: " + e.getMessage(), e);
         }
-        String flag = ChecksFlag.read(reader.getTrailer().getAsDict(PdfName.INFO));
+        String flag = ChecksEntry.read(reader.getTrailer().getAsDict(PdfName.INFO));
         String printed = printedDigest(reader);
         String attached = attachedDigest(reader);
         if (printed == null) {

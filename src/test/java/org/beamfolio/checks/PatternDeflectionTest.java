@@ -7,7 +7,7 @@ import java.util.List;
 import java.util.function.DoubleUnaryOperator;
 import org.beamfolio.TestJobs;
 import org.beamfolio.analysis.AnalysisResult;
-import org.beamfolio.results.CheckOutcome;
+import org.beamfolio.checks.CheckOutcome;
 import org.junit.jupiter.api.Test;
 
 /**

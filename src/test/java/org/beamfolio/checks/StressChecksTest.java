@@ -6,7 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.util.List;
 import org.beamfolio.TestJobs;
 import org.beamfolio.analysis.AnalysisResult;
-import org.beamfolio.results.CheckOutcome;
+import org.beamfolio.checks.CheckOutcome;
 import org.junit.jupiter.api.Test;
 
 /** Fibre, shear and deflection checks against values worked by hand in the test. */

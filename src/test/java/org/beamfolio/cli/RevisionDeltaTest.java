@@ -26,7 +26,7 @@ class RevisionDeltaTest {
         try (var doc = Loader.loadPDF(temp.resolve("b4-rev-b.pdf").toFile())) {
             String text = new PDFTextStripper().getText(doc).replaceAll("\\s+", " ");
             assertTrue(text.contains("Changes since the previous revision"));
-            assertTrue(text.contains("loads[5].P 2 kip 3 kip"), "the changed load");
+            assertTrue(text.contains("loads[L point at 9 ft].P 2 kip 3 kip"), "the changed load, named by case, type and place");
             assertTrue(text.contains("project.revision A B"));
             assertTrue(text.contains("98,270 lb·ft at 11.53 ft"), "previous moment");
             // The hoist load grew to 3 kip at 9 ft. By statics, D + L on the 24 ft span: deck 55 psf x 7 ft

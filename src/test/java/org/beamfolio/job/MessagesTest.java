@@ -7,6 +7,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.nio.charset.StandardCharsets;
 import java.util.List;
 import org.beamfolio.model.ReportSettings;
+import org.beamfolio.units.UnitSystem;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -130,8 +131,8 @@ class MessagesTest {
         String si = US_JOB.replace("report: { units: US }\n", "").replace("24 ft", "7.3152 m").replace("0 ft", "0 m");
         JobReading reading = read(si);
         assertTrue(reading.ok(), reading.report());
-        assertEquals(ReportSettings.UnitSystem.SI, reading.job().report().units());
-        assertEquals(ReportSettings.UnitSystem.US, read(US_JOB.replace("report: { units: US }\n", "")).job().report().units());
+        assertEquals(UnitSystem.SI, reading.job().report().units());
+        assertEquals(UnitSystem.US, read(US_JOB.replace("report: { units: US }\n", "")).job().report().units());
     }
 
     @Test

@@ -16,7 +16,7 @@ import org.beamfolio.checks.Checks;
 import org.beamfolio.derivation.Step;
 import org.beamfolio.derivation.StressSteps;
 import org.beamfolio.job.JobReader;
-import org.beamfolio.results.CheckOutcome;
+import org.beamfolio.checks.CheckOutcome;
 import org.junit.jupiter.api.Test;
 
 /**

@@ -19,7 +19,7 @@ import org.beamfolio.job.JobReader;
 import org.beamfolio.model.ReportSettings;
 import org.beamfolio.report.drawing.Drawing;
 import org.beamfolio.report.drawing.LoadingDiagram;
-import org.beamfolio.results.ReportUnits;
+import org.beamfolio.units.ReportUnits;
 import org.junit.jupiter.api.Test;
 
 /**

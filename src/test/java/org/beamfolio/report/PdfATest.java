@@ -41,7 +41,7 @@ class PdfATest {
     void aPlainPdfIsNotPdfA() throws Exception {
         // the control: with --no-pdfa the same package has no output intent or XMP, and the validator says so
         AnalysisResult r = Analysis.run(JobReader.read(Path.of("example-jobs/balcony-cantilever.yaml")).job());
-        byte[] pdf = new PackageRenderer().render(r, Checks.run(r), null, java.util.List.of(), false);
+        byte[] pdf = new PackageRenderer().render(r, Checks.run(r), null, false);
         try (PDFAParser parser = Foundries.defaultInstance().createParser(new ByteArrayInputStream(pdf), PDFAFlavour.PDFA_3_B)) {
             ValidationResult result = Foundries.defaultInstance().createValidator(PDFAFlavour.PDFA_3_B, false).validate(parser);
             org.junit.jupiter.api.Assertions.assertFalse(result.isCompliant());

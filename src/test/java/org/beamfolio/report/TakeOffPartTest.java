@@ -8,7 +8,7 @@ import java.util.List;
 import org.beamfolio.TestJobs;
 import org.beamfolio.model.Job;
 import org.beamfolio.model.ReportSettings;
-import org.beamfolio.results.ReportUnits;
+import org.beamfolio.units.ReportUnits;
 import org.junit.jupiter.api.Test;
 
 /** The take-off table and the live load reduction as the package prints them, every step and every reason. */
@@ -19,7 +19,7 @@ class TakeOffPartTest {
 
     static ReportModel.AreaLoads printed(String text) {
         Job j = TestJobs.job(text);
-        return new TakeOffPart(j.takeOff(), j.report().units(), new Texts(ReportUnits.of(ReportSettings.UnitSystem.US), ReportSettings.Positions.DECIMAL)).build();
+        return new TakeOffPart(j.takeOff(), j.report().units(), new Texts(ReportUnits.of(org.beamfolio.units.UnitSystem.US), ReportSettings.Positions.DECIMAL)).build();
     }
 
     static String working(ReportModel.AreaLoads a) {
@@ -117,7 +117,7 @@ class TakeOffPartTest {
     void anSiPackageTakesOffInKilopascalsAndSquareMetres() {
         Job j = TestJobs.job(org.beamfolio.loads.AreaLoadJobsTest.job(30, "  office: { L: 2.4 kPa, reducible: [ L ] }\n",
                 "  live_load_reduction: { KLL: 2 }\n", "  - { type: area, load: office, width: 3 m }\n"));
-        ReportModel.AreaLoads a = new TakeOffPart(j.takeOff(), j.report().units(), new Texts(ReportUnits.of(ReportSettings.UnitSystem.SI), ReportSettings.Positions.DECIMAL)).build();
+        ReportModel.AreaLoads a = new TakeOffPart(j.takeOff(), j.report().units(), new Texts(ReportUnits.of(org.beamfolio.units.UnitSystem.SI), ReportSettings.Positions.DECIMAL)).build();
         // 2.4 kPa x 3 m = 7.2 kN/m (by hand); AT = 3 m x 9.144 m = 27.43 m^2 = 295.3 ft^2
         assertEquals("2.4 kPa × 3 m = 7.2 kN/m", a.takeOff().rows().get(0).get(2));
         assertTrue(working(a).contains("AT = 27.43 m² (295.3 ft²)"), working(a));
@@ -127,6 +127,6 @@ class TakeOffPartTest {
     void aJobWithoutAreaLoadsPrintsNoTakeOff() {
         Job j = TestJobs.job(TestJobs.text("6 m", "    - { at: 0 m, type: pin }\n    - { at: 6 m, type: roller }\n",
                 "  - { case: D, type: uniform, w: 2 kN/m }\n"));
-        assertNull(new TakeOffPart(j.takeOff(), j.report().units(), new Texts(ReportUnits.of(ReportSettings.UnitSystem.US), ReportSettings.Positions.DECIMAL)).build());
+        assertNull(new TakeOffPart(j.takeOff(), j.report().units(), new Texts(ReportUnits.of(org.beamfolio.units.UnitSystem.US), ReportSettings.Positions.DECIMAL)).build());
     }
 }

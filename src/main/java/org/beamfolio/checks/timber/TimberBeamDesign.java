@@ -19,9 +19,9 @@ import org.beamfolio.design.timber.AdjustedValues;
 import org.beamfolio.design.timber.BeamStability;
 import org.beamfolio.design.timber.Creep;
 import org.beamfolio.design.timber.EffectiveLength;
-import org.beamfolio.design.timber.Factor;
-import org.beamfolio.design.timber.LoadDuration;
-import org.beamfolio.design.timber.TimberValues;
+import org.beamfolio.model.timber.Factor;
+import org.beamfolio.model.timber.LoadDuration;
+import org.beamfolio.model.timber.TimberValues;
 import org.beamfolio.model.DeflectionLimit;
 import org.beamfolio.model.Material;
 import org.beamfolio.model.Section;
@@ -149,7 +149,7 @@ public final class TimberBeamDesign {
                                 zeroAround[1] - zeroAround[0]);
                     } catch (BeamStability.SlendernessException ex) {
                         org.beamfolio.units.Lengths.Style style = result.job().report().units()
-                                == org.beamfolio.model.ReportSettings.UnitSystem.SI
+                                == org.beamfolio.units.UnitSystem.SI
                                 ? org.beamfolio.units.Lengths.Style.METRES : org.beamfolio.units.Lengths.Style.FEET_AND_INCHES;
                         throw new TimberInputException(design.beamAt(), "beam", String.format(Locale.ROOT,
                                 "under %s the %s edge is in compression from %s to %s, %s: %s, Table 3.3.3 row \"%s\"; %s",
@@ -316,7 +316,7 @@ public final class TimberBeamDesign {
         }
 
         private AnalysisResult.Span whole() {
-            return new AnalysisResult.Span("beam", 0, result.job().beam().length());
+            return new AnalysisResult.Span("beam", 0, result.job().beam().length(), false);
         }
 
         private static Extreme largestIn(Field f, AnalysisResult.Span region) {

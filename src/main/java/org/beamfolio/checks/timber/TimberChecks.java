@@ -5,9 +5,12 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import org.beamfolio.analysis.AnalysisResult;
-import org.beamfolio.design.timber.Factor;
-import org.beamfolio.results.CheckOutcome;
-import org.beamfolio.results.ReportUnits;
+import org.beamfolio.model.timber.Factor;
+import org.beamfolio.checks.Authority;
+import org.beamfolio.checks.Check;
+import org.beamfolio.checks.CheckKind;
+import org.beamfolio.checks.CheckOutcome;
+import org.beamfolio.units.ReportUnits;
 
 /**
  * The NDS 2018 checks of a timber beam (allowable stress design), each the governing one over the
@@ -15,10 +18,23 @@ import org.beamfolio.results.ReportUnits;
  * shear, bearing at each support given a bearing length, and long-term deflection with creep.
  * The numbers are {@link TimberBeamDesign}'s, the ones the timber design sheet prints.
  */
-public final class TimberChecks {
-    private TimberChecks() {}
+public final class TimberChecks implements Check {
+    @Override
+    public String id() {
+        return "nds";
+    }
 
-    public static List<CheckOutcome> run(AnalysisResult result) {
+    @Override
+    public Authority authority() {
+        return new Authority("NDS 2018", "2018", "3.3, 3.4, 3.10, 3.5.2");
+    }
+
+    @Override
+    public List<CheckOutcome> run(AnalysisResult result) {
+        return outcomes(result);
+    }
+
+    public static List<CheckOutcome> outcomes(AnalysisResult result) {
         TimberDesignResult d = TimberBeamDesign.of(result);
         if (d == null) {
             return List.of();
@@ -36,9 +52,9 @@ public final class TimberChecks {
                     + stability + " = " + String.format(java.util.Locale.ROOT, "%.3f", b.adjusted().factor(b.adjusted().governingStability()))
                     + "; governing of " + count + " combinations",
                     u.stress().fromSi(b.fb()), u.stress().fromSi(b.limit()), b.ratio(), b.ratio() <= 1, b.combination(), b.at(), stress,
-                    "flexure", "NDS 2018 3.3.1, " + d.values().kind().applicability(),
+                    CheckKind.FLEXURE, "NDS 2018 3.3.1, " + d.values().kind().applicability(),
                     b.adjusted().stability() != null ? "bending with lateral stability (CL)" : "bending",
-                    List.of(b.segment().from(), b.segment().to()),
+                    new CheckOutcome.Segment(b.segment().from(), b.segment().to()),
                     factors(b.adjusted().factors())));
         }
         TimberDesignResult.Shear s = d.governingShear();
@@ -52,14 +68,14 @@ public final class TimberChecks {
                     : "no support has a bearing length, so every load is kept (conservative)"),
                     u.stress().fromSi(s.fv()), u.stress().fromSi(s.adjusted().value()), s.ratio(), s.ratio() <= 1,
                     s.combination(), s.at(), stress,
-                    "shear", "NDS 2018 3.4.2, Eq. 3.4-2", "shear parallel to grain", List.of(), f));
+                    CheckKind.SHEAR, "NDS 2018 3.4.2, Eq. 3.4-2", "shear parallel to grain", null, f));
         }
         for (TimberDesignResult.Bearing br : d.bearing()) {
             out.add(new CheckOutcome("nds-bearing-R" + br.support(), "Bearing at R" + br.support()
                     + ", fc_perp = R / (b lb) against Fc_perp' (no load-duration factor)",
                     u.stress().fromSi(br.stress()), u.stress().fromSi(br.adjusted().value()), br.ratio(), br.ratio() <= 1,
                     br.combination(), br.at(), stress,
-                    "bearing", "NDS 2018 3.10.2, 3.10.4", "compression perpendicular to grain", List.of(),
+                    CheckKind.BEARING, "NDS 2018 3.10.2, 3.10.4", "compression perpendicular to grain", null,
                     factors(br.adjusted().factors())));
         }
         for (TimberDesignResult.LongTerm lt : d.deflection()) {
@@ -70,7 +86,7 @@ public final class TimberChecks {
                             + " with Kcr = " + d.kcr().value() + ", limit " + lt.limitText(),
                     u.deflection().fromSi(lt.deflection()), u.deflection().fromSi(lt.allowed()), lt.ratio(), lt.ratio() <= 1,
                     lt.limitCases(), lt.at(), u.deflection().symbol(),
-                    "deflection", "NDS 2018 3.5.2, Eq. 3.5-1", "long-term deflection with creep", List.of(),
+                    CheckKind.DEFLECTION, "NDS 2018 3.5.2, Eq. 3.5-1", "long-term deflection with creep", null,
                     Map.of("Kcr", d.kcr().value())));
         }
         return out;

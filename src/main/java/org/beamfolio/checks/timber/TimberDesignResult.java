@@ -3,9 +3,9 @@ package org.beamfolio.checks.timber;
 import java.util.List;
 import org.beamfolio.design.timber.AdjustedValues;
 import org.beamfolio.design.timber.EffectiveLength;
-import org.beamfolio.design.timber.Factor;
-import org.beamfolio.design.timber.LoadDuration;
-import org.beamfolio.design.timber.TimberValues;
+import org.beamfolio.model.timber.Factor;
+import org.beamfolio.model.timber.LoadDuration;
+import org.beamfolio.model.timber.TimberValues;
 
 /**
  * The NDS design of a timber beam, combination by combination, found once and read by the

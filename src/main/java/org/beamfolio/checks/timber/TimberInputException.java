@@ -1,6 +1,6 @@
 package org.beamfolio.checks.timber;
 
-import org.beamfolio.job.Location;
+import org.beamfolio.model.Location;
 
 /**
  * A job that the NDS does not allow and that shows only once the beam is solved (a slenderness

@@ -1,5 +1,12 @@
 package org.beamfolio.design.timber;
 
+import org.beamfolio.model.timber.TimberKind;
+import org.beamfolio.model.timber.TimberService;
+import org.beamfolio.model.timber.TimberValues;
+import org.beamfolio.model.timber.LoadDuration;
+import org.beamfolio.model.timber.ServiceFactors;
+import org.beamfolio.model.timber.Factor;
+import org.beamfolio.model.timber.Property;
 import java.util.ArrayList;
 import java.util.List;
 

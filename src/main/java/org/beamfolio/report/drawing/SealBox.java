@@ -8,7 +8,7 @@ import java.awt.geom.Rectangle2D;
  * places an empty signature field named {@link #FIELD} over it, which {@code seal} fills.
  */
 public final class SealBox implements Drawing {
-    public static final String FIELD = "EngineerSeal";
+    public static final String FIELD = org.beamfolio.model.PackageSeal.FIELD;
 
     @Override
     public void draw(Graphics2D g, double width, double height) {

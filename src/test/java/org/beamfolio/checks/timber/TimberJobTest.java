@@ -10,8 +10,8 @@ import java.util.List;
 import org.beamfolio.TestJobs;
 import org.beamfolio.analysis.AnalysisResult;
 import org.beamfolio.design.timber.EffectiveLength;
-import org.beamfolio.design.timber.LoadDuration;
-import org.beamfolio.results.CheckOutcome;
+import org.beamfolio.model.timber.LoadDuration;
+import org.beamfolio.checks.CheckOutcome;
 import org.junit.jupiter.api.Test;
 
 /** Timber design of whole jobs, from the job file to the checks, against published examples and by hand. */
@@ -150,7 +150,7 @@ class TimberJobTest {
         double s = 1.5 * 9.25 * 9.25 / 6;
         assertEquals(100 * 144 / 8.0 * 12 / s / (900 * 0.9 * 1.1), governing.ratio(), 1e-9);
         assertEquals(121 * 144 / 8.0 * 12 / s / (900 * 1.15 * 1.1), withSnow.ratio(), 1e-9);
-        CheckOutcome bending = TimberChecks.run(r).stream().filter(c -> c.id().equals("nds-bending")).findFirst().orElseThrow();
+        CheckOutcome bending = TimberChecks.outcomes(r).stream().filter(c -> c.id().equals("nds-bending")).findFirst().orElseThrow();
         assertEquals("D", bending.combination());
         assertEquals(governing.fb() / PSI, bending.demand(), 1e-9);
     }

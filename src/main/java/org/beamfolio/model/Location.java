@@ -1,4 +1,4 @@
-package org.beamfolio.job;
+package org.beamfolio.model;
 
 /** A place in a job file: 1-based line and column. */
 public record Location(int line, int column) {

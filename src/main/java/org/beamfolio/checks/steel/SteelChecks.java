@@ -1,4 +1,8 @@
-package org.beamfolio.design.steel;
+package org.beamfolio.checks.steel;
+
+import org.beamfolio.design.steel.LimitStateResult;
+import org.beamfolio.design.steel.Method;
+import org.beamfolio.design.steel.SteelDesignWork;
 
 import java.util.ArrayList;
 import java.util.Comparator;
@@ -7,8 +11,11 @@ import java.util.List;
 import java.util.Map;
 import org.beamfolio.analysis.AnalysisResult;
 import org.beamfolio.analysis.UnbracedSegments;
-import org.beamfolio.results.CheckOutcome;
-import org.beamfolio.results.ReportUnits;
+import org.beamfolio.checks.Authority;
+import org.beamfolio.checks.Check;
+import org.beamfolio.checks.CheckKind;
+import org.beamfolio.checks.CheckOutcome;
+import org.beamfolio.units.ReportUnits;
 import org.beamfolio.units.Unit;
 import org.beamfolio.units.Units;
 
@@ -19,16 +26,29 @@ import org.beamfolio.units.Units;
  * crippling. Demand is the required strength (Ma or Mu, Va or Vu, Ra or Ru) and limit the
  * available strength (Mn/Omega or phi Mn), in kip*ft and kips (US) or kN*m and kN (SI).
  */
-public final class SteelChecks {
-    private SteelChecks() {}
+public final class SteelChecks implements Check {
+    @Override
+    public String id() {
+        return "aisc";
+    }
+
+    @Override
+    public Authority authority() {
+        return new Authority("AISC 360", "2016 or 2022, as the job states", "Chapters F and G, J10.2 and J10.3");
+    }
+
+    @Override
+    public List<CheckOutcome> run(AnalysisResult result) {
+        return outcomes(result);
+    }
 
     /** The steel checks of the job, none without {@code design.steel}. */
-    public static List<CheckOutcome> run(AnalysisResult result) {
+    public static List<CheckOutcome> outcomes(AnalysisResult result) {
         SteelDesignWork work = SteelDesignWork.of(result);
         if (work == null) {
             return List.of();
         }
-        boolean si = result.job().report().units() == org.beamfolio.model.ReportSettings.UnitSystem.SI;
+        boolean si = result.job().report().units() == org.beamfolio.units.UnitSystem.SI;
         Unit moment = Units.of(si ? "kN*m" : "kip*ft");
         Unit force = Units.of(si ? "kN" : "kip");
         Unit length = ReportUnits.of(result.job().report().units()).length();
@@ -46,15 +66,15 @@ public final class SteelChecks {
             out.add(new CheckOutcome(segmentId(row, length), "Flexure, " + where + " in compression (" + braced + "), "
                     + governing.limitState() + " governs (" + method + ")", moment.fromSi(row.demand()),
                     moment.fromSi(row.available()), row.ratio(), row.ratio() <= 1, row.combination().name(),
-                    seg.demand().at(), moment.symbol(), "flexure", governing.clause().reference(), governing.limitState(),
-                    List.of(seg.from(), seg.to()), factors));
+                    seg.demand().at(), moment.symbol(), CheckKind.FLEXURE, governing.clause().reference(), governing.limitState(),
+                    new CheckOutcome.Segment(seg.from(), seg.to()), factors));
         }
         work.shear().stream().max(Comparator.comparingDouble(SteelDesignWork.ShearRow::ratio)).ifPresent(row -> {
             LimitStateResult governing = row.strength().governing();
             out.add(new CheckOutcome("shear", "Shear, " + governing.limitState() + " (" + method + ")",
                     force.fromSi(Math.abs(row.demand().value())), force.fromSi(row.available()), row.ratio(),
-                    row.ratio() <= 1, row.combination().name(), row.demand().at(), force.symbol(), "shear",
-                    governing.clause().reference(), governing.limitState(), List.of(), Map.of()));
+                    row.ratio() <= 1, row.combination().name(), row.demand().at(), force.symbol(), CheckKind.SHEAR,
+                    governing.clause().reference(), governing.limitState(), null, Map.of()));
         });
         Map<String, SteelDesignWork.BearingRow> bearing = new LinkedHashMap<>();
         for (SteelDesignWork.BearingRow row : work.bearing()) {
@@ -69,8 +89,8 @@ public final class SteelChecks {
                             .fromSi(row.strength().factors().get("lb"))) + " "
                     + ReportUnits.of(result.job().report().units()).sectionLength().symbol() + " (" + method + ")",
                     force.fromSi(row.force()), force.fromSi(row.available()), row.ratio(), row.ratio() <= 1,
-                    row.combination().name(), row.at(), force.symbol(), "bearing", governing.clause().reference(),
-                    governing.limitState(), List.of(), Map.of()));
+                    row.combination().name(), row.at(), force.symbol(), CheckKind.BEARING, governing.clause().reference(),
+                    governing.limitState(), null, Map.of()));
         }
         return out;
     }

@@ -1,8 +1,5 @@
-package org.beamfolio.results;
+package org.beamfolio.units;
 
-import org.beamfolio.model.ReportSettings;
-import org.beamfolio.units.Unit;
-import org.beamfolio.units.Units;
 
 /**
  * The units a package reports in: US reports ft, lb, lb*ft, lb/ft, psi and in (deflection, and
@@ -10,14 +7,18 @@ import org.beamfolio.units.Units;
  */
 public record ReportUnits(Unit length, Unit force, Unit moment, Unit distributed, Unit stress, Unit deflection,
                           Unit sectionLength, Unit area, Unit firstMoment, Unit secondMoment, Unit rotationalStiffness,
-                          Unit stiffness) {
-    public static ReportUnits of(ReportSettings.UnitSystem system) {
-        return system == ReportSettings.UnitSystem.SI
+                          Unit stiffness, UnitSystem system) {
+    public static ReportUnits of(UnitSystem system) {
+        return system == UnitSystem.SI
                 ? new ReportUnits(Units.of("m"), Units.of("kN"), Units.of("kN*m"), Units.of("kN/m"), Units.of("MPa"),
                         Units.of("mm"), Units.of("mm"), Units.of("mm^2"), Units.of("mm^3"), Units.of("mm^4"),
-                        Units.of("kN*m/rad"), Units.of("kN/mm"))
+                        Units.of("kN*m/rad"), Units.of("kN/mm"), UnitSystem.SI)
                 : new ReportUnits(Units.of("ft"), Units.of("lb"), Units.of("lb*ft"), Units.of("lb/ft"), Units.of("psi"),
                         Units.of("in"), Units.of("in"), Units.of("in^2"), Units.of("in^3"), Units.of("in^4"),
-                        Units.of("kip*ft/rad"), Units.of("kip/in"));
+                        Units.of("kip*ft/rad"), Units.of("kip/in"), UnitSystem.US);
+    }
+
+    public boolean us() {
+        return system == UnitSystem.US;
     }
 }

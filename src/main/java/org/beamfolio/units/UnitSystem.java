@@ -1,0 +1,4 @@
+package org.beamfolio.units;
+
+/** The unit system a package reports in: US customary or SI. */
+public enum UnitSystem { US, SI }
