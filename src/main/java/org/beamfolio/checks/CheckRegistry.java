@@ -21,7 +21,9 @@ public final class CheckRegistry {
                 new FibreStressCheck(FibreStressCheck.Kind.TENSION),
                 new FibreStressCheck(FibreStressCheck.Kind.COMPRESSION),
                 new ShearStressCheck(),
-                new org.beamfolio.checks.steel.SteelChecks(),
+                new SteelFlexureCheck(),
+                new SteelShearCheck(),
+                new SteelBearingCheck(),
                 new DeflectionCheck(),
                 new org.beamfolio.checks.timber.TimberChecks()));
     }

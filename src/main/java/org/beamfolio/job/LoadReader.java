@@ -89,14 +89,14 @@ final class LoadReader {
         YamlNode noteNode = f.optional("note");
         String note = noteNode == null ? "" : c.text(noteNode, f.path("note"));
         if (type == null) {
-            f.rejectUnknown("P", "M", "w", "at", "from", "to", "sense", "load", "width");
+            f.rejectUnknown("P", "M", "w", "at", "from", "to", "sense", "load", "width", "bearing");
             return null;
         }
         if (f.has("width") || f.has("load")) {
             // the engineer meant an area load: say how to write one, not what is wrong with w
             c.error(f.node(), f.path("type"), "a tributary width belongs to an area load: write type: area, load: <a name under"
                     + " area_loads, which holds the pressure>, width: ...; or give the line load w without a width");
-            f.rejectUnknown("P", "M", "w", "at", "from", "to", "sense");
+            f.rejectUnknown("P", "M", "w", "at", "from", "to", "sense", "bearing");
             return null;
         }
         Load load = switch (type) {
@@ -166,7 +166,12 @@ final class LoadReader {
         YamlNode pNode = f.required("P");
         Double p = pNode == null ? null : c.quantity(pNode, f.path("P"), Dimension.FORCE);
         Double at = at(c, f, length);
-        return p == null || at == null ? null : new Load.Point(loadCase, p, at, note, where);
+        YamlNode bearingNode = f.optional("bearing");
+        Double bearing = bearingNode == null ? null : c.positive(bearingNode, f.path("bearing"), Dimension.LENGTH);
+        if (bearingNode != null && bearing == null) {
+            return null;
+        }
+        return p == null || at == null ? null : new Load.Point(loadCase, p, at, note, where, bearing);
     }
 
     private static Load couple(ReadContext c, ReadContext.Fields f, String loadCase, String note, Double length, Location where) {

@@ -30,7 +30,12 @@ public sealed interface Load {
     /** The same load times a factor. */
     Load scaled(double factor);
 
-    record Point(String loadCase, double P, double at, String note, Location where) implements Load {
+    /** A concentrated force; {@code bearing} (m), when the job gives it, the length it bears on along the beam, else null. */
+    record Point(String loadCase, double P, double at, String note, Location where, Double bearing) implements Load {
+        public Point(String loadCase, double P, double at, String note, Location where) {
+            this(loadCase, P, at, note, where, null);
+        }
+
         public double force() {
             return P;
         }
@@ -44,7 +49,7 @@ public sealed interface Load {
         }
 
         public Load scaled(double factor) {
-            return new Point(loadCase, factor * P, at, note, where);
+            return new Point(loadCase, factor * P, at, note, where, bearing);
         }
     }
 

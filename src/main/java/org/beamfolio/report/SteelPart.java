@@ -12,14 +12,13 @@ import org.beamfolio.design.steel.Equation;
 import org.beamfolio.design.steel.LimitStateResult;
 import org.beamfolio.design.steel.Method;
 import org.beamfolio.design.steel.Slenderness;
-import org.beamfolio.checks.steel.SteelChecks;
 import org.beamfolio.design.steel.SteelDesignWork;
 import org.beamfolio.design.steel.SteelMember;
 import org.beamfolio.design.steel.Strength;
 import org.beamfolio.design.steel.Value;
 import org.beamfolio.model.Material;
-import org.beamfolio.model.ReportSettings;
 import org.beamfolio.units.Numbers;
+import org.beamfolio.units.Units;
 
 /**
  * The steel design sheet: the catalogue row and the steel used, the compactness of the elements,
@@ -47,7 +46,7 @@ final class SteelPart {
         SteelMember m = work.member();
         String method = work.method() == Method.LRFD ? "LRFD (phi Rn)" : "ASD (Rn / Omega)";
         String title = "Steel design: " + m.shape().designation() + " to " + m.edition().label() + ", " + method;
-        List<SteelDesignWork.FlexureRow> segments = SteelChecks.governingPerSegment(work.flexure());
+        List<SteelDesignWork.FlexureRow> segments = work.governingPerSegment();
         SteelDesignWork.FlexureRow governing = segments.stream()
                 .max(Comparator.comparingDouble(SteelDesignWork.FlexureRow::ratio)).orElse(null);
         List<ReportModel.Equation> flexure = new ArrayList<>();
@@ -75,12 +74,14 @@ final class SteelPart {
         List<ReportModel.Equation> bearing = new ArrayList<>();
         Map<String, SteelDesignWork.BearingRow> worst = new java.util.LinkedHashMap<>();
         for (SteelDesignWork.BearingRow row : work.bearing()) {
-            worst.merge(row.support() + row.strength().kind(), row, (a, b) -> b.ratio() > a.ratio() ? b : a);
+            worst.merge(row.support() + ":" + row.index() + row.strength().kind(), row, (a, b) -> b.ratio() > a.ratio() ? b : a);
         }
         for (SteelDesignWork.BearingRow row : worst.values()) {
             bearing.addAll(limitStates(row.strength()));
-            bearing.add(available("Support " + (row.support() + 1) + " at " + t.len(row.at()) + ", largest reaction under "
-                    + row.combination().name(), row.strength(), work.method(), row.force(), row.available(), row.ratio(), false));
+            String place = row.support() ? "Support " + (row.index() + 1) + " at " + t.len(row.at()) + ", largest reaction"
+                    : "Point loads at " + t.len(row.at()) + ", their largest sum";
+            bearing.add(available(place + " under " + row.combination().name(), row.strength(), work.method(), row.force(),
+                    row.available(), row.ratio(), false));
         }
         return new ReportModel.SteelSheet(title, member(m), catalogueRow(m), compactness(m), segmentTable(segments),
                 flexureNote, flexure, shearEqs, bearing);
@@ -174,8 +175,7 @@ final class SteelPart {
                 : amount(s.nominal(), moment) + " / " + Numbers.format(r.omega())) + " = " + amount(available, moment)
                 + "; ratio = " + amount(demand, moment) + " / " + amount(available, moment);
         if (moment && !si) {
-            numbers += " (" + Numbers.format(available / (4.4482216152605e3 * 0.3048), "kip·ft") + " available, "
-                    + Numbers.format(demand / (4.4482216152605e3 * 0.3048), "kip·ft") + " required)";
+            numbers += " (" + in(available, "kip*ft") + " available, " + in(demand, "kip*ft") + " required)";
         }
         return new ReportModel.Equation(what, symbolic, numbers, Numbers.format(ratio) + (ratio <= 1 ? " (meets)" : " (EXCEEDS)"),
                 r.clause().reference() + (method == Method.LRFD ? ", phi = " + Numbers.format(r.phi())
@@ -194,25 +194,26 @@ final class SteelPart {
     /** A value of a worked equation with its unit: in, in², ..., ksi, kip, kip·in (US) or mm, ..., MPa, kN, kN·m (SI). */
     private String value(Value v) {
         double x = v.value();
-        double inch = 0.0254;
-        double kip = 4.4482216152605e3;
         return switch (v.kind()) {
             case NUMBER -> Numbers.format(x);
-            case LENGTH -> si ? Numbers.format(x * 1e3, "mm") : Numbers.format(x / inch, "in");
-            case AREA -> si ? Numbers.format(x * 1e6, "mm²") : Numbers.format(x / (inch * inch), "in²");
-            case MODULUS -> si ? Numbers.format(x * 1e9, "mm³") : Numbers.format(x / Math.pow(inch, 3), "in³");
-            case INERTIA -> si ? Numbers.format(x * 1e12, "mm⁴") : Numbers.format(x / Math.pow(inch, 4), "in⁴");
-            case WARPING -> si ? Numbers.format(x * 1e18, "mm⁶") : Numbers.format(x / Math.pow(inch, 6), "in⁶");
-            case STRESS -> si ? Numbers.format(x / 1e6, "MPa") : Numbers.format(x / (kip / (inch * inch)), "ksi");
-            case FORCE -> si ? Numbers.format(x / 1e3, "kN") : Numbers.format(x / kip, "kip");
-            case MOMENT -> si ? Numbers.format(x / 1e3, "kN·m") : Numbers.format(x / (kip * inch), "kip·in");
+            case LENGTH -> in(x, si ? "mm" : "in");
+            case AREA -> in(x, si ? "mm^2" : "in^2");
+            case MODULUS -> in(x, si ? "mm^3" : "in^3");
+            case INERTIA -> in(x, si ? "mm^4" : "in^4");
+            case WARPING -> Numbers.format(x * Math.pow(Units.of(si ? "mm" : "in").fromSi(1), 6), si ? "mm⁶" : "in⁶");
+            case STRESS -> in(x, si ? "MPa" : "ksi");
+            case FORCE -> in(x, si ? "kN" : "kip");
+            case MOMENT -> in(x, si ? "kN*m" : "kip*in");
         };
+    }
+
+    private static String in(double si, String unit) {
+        return Numbers.format(Units.of(unit).fromSi(si), Texts.symbol(Units.of(unit)));
     }
 
     /** A result as printed: a US moment also in kip·ft, the unit of the checks. */
     private String resultValue(Value v) {
-        return v.kind() == org.beamfolio.design.steel.Kind.MOMENT && !si
-                ? value(v) + " = " + Numbers.format(v.value() / (4.4482216152605e3 * 0.3048), "kip·ft") : value(v);
+        return v.kind() == org.beamfolio.design.steel.Kind.MOMENT && !si ? value(v) + " = " + in(v.value(), "kip*ft") : value(v);
     }
 
     private String amount(double si, boolean moment) {
@@ -221,7 +222,7 @@ final class SteelPart {
 
     /** A moment in the sheet's table unit, kip·ft or kN·m, without the unit. */
     private String moment(double si) {
-        return Numbers.format(si / (this.si ? 1e3 : 4.4482216152605e3 * 0.3048));
+        return Numbers.format(Units.of(this.si ? "kN*m" : "kip*ft").fromSi(si));
     }
 
     /** {@code , Eq. F2-2} for an equation number; a clause or a remark as it is; nothing when it repeats the clause. */

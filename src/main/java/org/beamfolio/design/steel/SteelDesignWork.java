@@ -10,6 +10,7 @@ import org.beamfolio.analysis.UnbracedSegments;
 import org.beamfolio.model.Beam;
 import org.beamfolio.model.Bracing;
 import org.beamfolio.model.Job;
+import org.beamfolio.model.Load;
 import org.beamfolio.model.SectionShape;
 import org.beamfolio.model.Support;
 
@@ -37,9 +38,32 @@ public record SteelDesignWork(SteelMember member, Method method, List<FlexureRow
     /** The largest shear of one combination against the shear strength. */
     public record ShearRow(CombinationResult combination, Extreme demand, Strength strength, double available, double ratio) {}
 
-    /** One support's largest downward reaction against one web limit state. */
-    public record BearingRow(int support, double at, CombinationResult combination, double force, Strength strength,
-                             double available, double ratio) {}
+    /**
+     * A concentrated force on one flange under one combination against one web limit state: an
+     * upward reaction at a support, or the downward point loads at a position.
+     *
+     * @param support true at a support, false under point loads
+     * @param index the support's or the first point load's index (from 0) in the job
+     * @param force the compressive force on the flange (N), zero when it pulls instead
+     */
+    public record BearingRow(boolean support, int index, double at, CombinationResult combination, double force,
+                             Strength strength, double available, double ratio) {}
+
+    /** Where a bearing length is given: a support, or the point loads at one position (the least length given there). */
+    private record BearingPlace(boolean support, int index, double at, double length, List<Load.Point> loads) {}
+
+    /** Per flange segment (by flange, then along the beam), the combination with the largest ratio; the earlier one on a tie. */
+    public List<FlexureRow> governingPerSegment() {
+        java.util.Map<String, FlexureRow> best = new java.util.LinkedHashMap<>();
+        for (FlexureRow row : flexure) {
+            UnbracedSegments.Segment s = row.segment();
+            best.merge(s.flange() + ":" + s.from() + ":" + s.to(), row, (a, b) -> b.ratio() > a.ratio() ? b : a);
+        }
+        List<FlexureRow> result = new ArrayList<>(best.values());
+        result.sort(java.util.Comparator.comparing((FlexureRow r) -> r.segment().flange())
+                .thenComparingDouble(r -> r.segment().from()));
+        return result;
+    }
 
     /** The design of the job's beam, worked once and kept with the analysis; null without {@code design.steel}. */
     public static SteelDesignWork of(AnalysisResult result) {
@@ -56,6 +80,48 @@ public record SteelDesignWork(SteelMember member, Method method, List<FlexureRow
         return SteelMember.of(((SectionShape.Catalogued) shape).shape(), job.materials().get(job.beam().material()), edition);
     }
 
+    /** The supports with a bearing length, then each position of point loads with one, along the beam. */
+    private static List<BearingPlace> bearingPlaces(Job job) {
+        List<BearingPlace> places = new ArrayList<>();
+        List<Support> supports = job.beam().supports();
+        for (int i = 0; i < supports.size(); i++) {
+            if (supports.get(i).bearingLength() != null) {
+                places.add(new BearingPlace(true, i, supports.get(i).at(), supports.get(i).bearingLength(), List.of()));
+            }
+        }
+        double same = 1e-9 * job.beam().length();
+        List<Load> loads = job.loads();
+        for (int i = 0; i < loads.size(); i++) {
+            if (!(loads.get(i) instanceof Load.Point p) || p.bearing() == null) {
+                continue;
+            }
+            boolean counted = places.stream().anyMatch(q -> !q.support() && Math.abs(q.at() - p.at()) <= same);
+            if (counted) {
+                continue;
+            }
+            // every point load at this position bears there; the least bearing length given there is taken
+            List<Load.Point> here = new ArrayList<>();
+            double length = p.bearing();
+            for (Load l : loads) {
+                if (l instanceof Load.Point o && Math.abs(o.at() - p.at()) <= same) {
+                    here.add(o);
+                    length = o.bearing() == null ? length : Math.min(length, o.bearing());
+                }
+            }
+            places.add(new BearingPlace(false, i, p.at(), length, here));
+        }
+        return places;
+    }
+
+    /** The point loads of the combination's cases times their factors, down positive. */
+    private static double factored(List<Load.Point> loads, CombinationResult c) {
+        double sum = 0;
+        for (Load.Point p : loads) {
+            sum += c.factors().getOrDefault(p.loadCase(), 0.0) * p.P();
+        }
+        return sum;
+    }
+
     private static SteelDesignWork work(AnalysisResult result) {
         Job job = result.job();
         Beam beam = job.beam();
@@ -65,15 +131,12 @@ public record SteelDesignWork(SteelMember member, Method method, List<FlexureRow
         List<ShearRow> shear = new ArrayList<>();
         List<BearingRow> bearing = new ArrayList<>();
         Strength shearStrength = Shear.strength(member, null);
+        List<BearingPlace> places = bearingPlaces(job);
         List<Strength[]> web = new ArrayList<>();
-        for (Support s : beam.supports()) {
-            if (s.bearingLength() == null) {
-                web.add(null);
-                continue;
-            }
-            double fromEnd = Math.min(s.at(), beam.length() - s.at());
-            web.add(new Strength[] {WebLocalYielding.strength(member, s.bearingLength(), fromEnd),
-                    WebLocalCrippling.strength(member, s.bearingLength(), fromEnd)});
+        for (BearingPlace p : places) {
+            double fromEnd = Math.min(p.at(), beam.length() - p.at());
+            web.add(new Strength[] {WebLocalYielding.strength(member, p.length(), fromEnd),
+                    WebLocalCrippling.strength(member, p.length(), fromEnd)});
         }
         for (CombinationResult c : result.combinations()) {
             Field moment = c.response().moment();
@@ -92,14 +155,12 @@ public record SteelDesignWork(SteelMember member, Method method, List<FlexureRow
             Extreme v = Math.abs(vMin.value()) > Math.abs(vMax.value()) ? vMin : vMax;
             shear.add(new ShearRow(c, v, shearStrength, shearStrength.available(method),
                     shearStrength.ratio(v.value(), method)));
-            for (int i = 0; i < web.size(); i++) {
-                if (web.get(i) == null) {
-                    continue;
-                }
-                // a reaction pushing up bears on the bottom flange; one pulling down is uplift, not bearing
-                double force = Math.max(0, c.response().reactionForce()[i]);
+            for (int i = 0; i < places.size(); i++) {
+                BearingPlace p = places.get(i);
+                // a reaction pushing up bears on the bottom flange, loads pushing down on the top one; a pull is not bearing
+                double force = Math.max(0, p.support() ? c.response().reactionForce()[p.index()] : factored(p.loads(), c));
                 for (Strength s : web.get(i)) {
-                    bearing.add(new BearingRow(i, beam.supports().get(i).at(), c, force, s, s.available(method),
+                    bearing.add(new BearingRow(p.support(), p.index(), p.at(), c, force, s, s.available(method),
                             s.ratio(force, method)));
                 }
             }

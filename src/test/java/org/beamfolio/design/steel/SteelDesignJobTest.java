@@ -144,4 +144,19 @@ class SteelDesignJobTest {
         assertEquals(30.45, yielding.get("demand").asDouble(), 1e-9);
         assertTrue(bearing.get(1).get("clause").asText().endsWith("J10.3"));
     }
+
+    @Test
+    void webBearingUnderAPointLoadWithABearingLength() throws Exception {
+        String text = job("W18X50", "35 ft", "{ top: continuous }", "ASCE7-LRFD", "0.45 klf", "0.75 klf", "")
+                .replace("loads:\n", "loads:\n  - { case: L, type: point, P: 20 kip, at: 10 ft, bearing: 4 in }\n");
+        List<JsonNode> bearing = checksOfKind(results(text), "bearing");
+        assertEquals(2, bearing.size(), "yielding and crippling under the point load");
+        JsonNode yielding = bearing.get(0);
+        assertEquals("web-local-yielding-load1", yielding.get("id").asText());
+        // J10-2, 10 ft from the end (more than d): Rn = Fy tw (5 kdes + lb) = 50 x 0.355 x (5 x 0.972 + 4) kips
+        // (tw, kdes of W18x50 from the AISC Shapes Database v15.0), phi = 1.00; Ru = 1.6 x 20 = 32 kips (by hand)
+        assertEquals(50 * 0.355 * (5 * 0.972 + 4), yielding.get("limit").asDouble(), 1e-6);
+        assertEquals(32, yielding.get("demand").asDouble(), 1e-9);
+        assertEquals(10, yielding.get("at").asDouble(), 1e-12);
+    }
 }
