@@ -59,6 +59,11 @@ final class SteelDesignReader {
                     + "\" (one of: AISC360-16, AISC360-22)");
             return null;
         }
+        if (BuiltInSets.EN1990.equals(setName)) {
+            c.error(steelNode, design.path("steel"), "AISC 360 design goes with ASCE 7 combinations: use ASCE7-ASD, ASCE7-LRFD"
+                    + " or an explicit list with design.method, not EN1990");
+            return null;
+        }
         String implied = BuiltInSets.ASCE7_LRFD.equals(setName) ? "LRFD" : BuiltInSets.ASCE7_ASD.equals(setName) ? "ASD" : null;
         if (methodNode == null && implied == null) {
             c.error(steelNode, design.path("method"), "steel design needs design.method (ASD or LRFD): the combinations"

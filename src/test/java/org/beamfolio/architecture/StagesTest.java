@@ -34,7 +34,7 @@ class StagesTest {
             Map.entry("section", Set.of("units", "catalogue", "model")),
             Map.entry("combinations", Set.of("units", "model")),
             Map.entry("loads", Set.of("units")),
-            Map.entry("job", Set.of("units", "catalogue", "model", "section", "combinations", "loads")),
+            Map.entry("job", Set.of("units", "catalogue", "model", "section", "combinations", "loads", "design")),
             Map.entry("analysis", Set.of("units", "catalogue", "model", "section", "combinations", "loads")),
             Map.entry("design", Set.of("units", "catalogue", "model", "section", "analysis")),
             Map.entry("derivation", Set.of("units", "catalogue", "model", "section", "analysis")),

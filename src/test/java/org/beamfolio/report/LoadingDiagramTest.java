@@ -58,6 +58,10 @@ class LoadingDiagramTest {
             assertTrue(labels.get(i).box().getMinY() >= 0, what + ": label inside the drawing");
         }
         for (LoadingDiagram.Arrow a : layout.arrows()) {
+            for (LoadingDiagram.Label l : labels) {
+                var shaft = new java.awt.geom.Rectangle2D.Double(a.x() - 0.5, Math.min(a.top(), a.tip()), 1, Math.abs(a.tip() - a.top()));
+                assertFalse(shaft.intersects(l.box()), what + ": label \"" + l.text() + "\" crossed by a point-load arrow");
+            }
             for (LoadingDiagram.Band b : layout.bands()) {
                 // the shaft, short of its tip, stays out of every band
                 var shaft = new java.awt.geom.Rectangle2D.Double(a.x() - 0.01, a.top(), 0.02, a.tip() - a.top() - 0.5);

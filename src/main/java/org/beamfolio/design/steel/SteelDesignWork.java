@@ -11,6 +11,7 @@ import org.beamfolio.model.Beam;
 import org.beamfolio.model.Bracing;
 import org.beamfolio.model.Job;
 import org.beamfolio.model.Load;
+import org.beamfolio.model.Purpose;
 import org.beamfolio.model.SectionShape;
 import org.beamfolio.model.Support;
 
@@ -80,6 +81,18 @@ public record SteelDesignWork(SteelMember member, Method method, List<FlexureRow
         return SteelMember.of(((SectionShape.Catalogued) shape).shape(), job.materials().get(job.beam().material()), edition);
     }
 
+    /**
+     * Whether the combination is one the method checks: of a built-in ASCE 7 set, its strength
+     * combinations for LRFD and its allowable-stress ones for ASD; of the job's own list, every one
+     * (the job's {@code design.method} says what they are).
+     */
+    static boolean ofMethod(CombinationResult c, Method method, Job job) {
+        if (job.combinationSet() == null) {
+            return true;
+        }
+        return method == Method.LRFD ? c.purpose() == Purpose.STRENGTH : c.purpose() == Purpose.ALLOWABLE_STRESS;
+    }
+
     /** The supports with a bearing length, then each position of point loads with one, along the beam. */
     private static List<BearingPlace> bearingPlaces(Job job) {
         List<BearingPlace> places = new ArrayList<>();
@@ -139,6 +152,9 @@ public record SteelDesignWork(SteelMember member, Method method, List<FlexureRow
                     WebLocalCrippling.strength(member, p.length(), fromEnd)});
         }
         for (CombinationResult c : result.combinations()) {
+            if (!ofMethod(c, method, job)) {
+                continue;
+            }
             Field moment = c.response().moment();
             for (UnbracedSegments.Segment seg : UnbracedSegments.of(beam, moment)) {
                 MomentGradient gradient = MomentGradient.of(moment, seg.from(), seg.to(), seg.freeEnd());

@@ -105,7 +105,15 @@ public final class LoadingDiagram implements Drawing {
 
     public record Label(String text, Rectangle2D box, float x, float baseline) {}
 
-    public record Arrow(double x, double top, double tip, boolean upward) {}
+    public record Arrow(double x, double top, double tip, boolean upward) {
+        /** The shaft and head as a thin box, for keeping labels off it. */
+        public Rectangle2D shaft() {
+            return new Rectangle2D.Double(x - 3, Math.min(top, tip), 6, Math.abs(tip - top));
+        }
+    }
+
+    /** Horizontal clearance between two labels, so that two values never read as one. */
+    static final double GAP = 6;
 
     public Layout layout(double width, double height, FontMetrics fm) {
         double left = MARGIN;
@@ -155,7 +163,16 @@ public final class LoadingDiagram implements Drawing {
         List<Arrow> arrows = new ArrayList<>();
         double ascent = fm.getAscent();
         double descent = fm.getDescent();
+        // the arrows first, so that no label is put where an arrow's shaft will be drawn
+        for (BeamSketch.LoadMark l : sketch.loads()) {
+            if (l.kind() == BeamSketch.LoadMark.Kind.POINT) {
+                double x0 = left + l.from() * scale;
+                double tip = stackTop(bands, x0, beamY - 3);
+                arrows.add(new Arrow(x0, tip - 16, tip, l.start() < 0));
+            }
+        }
         int lineIndex = 0;
+        int pointIndex = 0;
         for (BeamSketch.LoadMark l : sketch.loads()) {
             double x0 = left + l.from() * scale;
             double w = fm.stringWidth(l.label());
@@ -163,15 +180,14 @@ public final class LoadingDiagram implements Drawing {
                 case LINE -> {
                     Band b = bands.get(lineIndex++);
                     double top = b.outline().getBounds2D().getMinY() - 3;
-                    labels.add(place(l.label(), (b.x0() + b.x1()) / 2 - w / 2, top, w, ascent, descent, width, bands, labels));
+                    labels.add(place(l.label(), (b.x0() + b.x1()) / 2 - w / 2, top, w, ascent, descent, width, bands, arrows, labels));
                 }
                 case POINT -> {
-                    double tip = stackTop(bands, x0, beamY - 3);
-                    double top = tip - 16;
-                    arrows.add(new Arrow(x0, top, tip, l.start() < 0));
-                    labels.add(place(l.label(), x0 + 3, top + ascent, w, ascent, descent, width, bands, labels));
+                    Arrow a = arrows.get(pointIndex++);
+                    labels.add(place(l.label(), x0 + 3, a.top() + ascent, w, ascent, descent, width, bands, arrows, labels));
                 }
-                case COUPLE_CCW, COUPLE_CW -> labels.add(place(l.label(), x0 + 12, beamY - 12, w, ascent, descent, width, bands, labels));
+                case COUPLE_CCW, COUPLE_CW -> labels.add(place(l.label(), x0 + 12, beamY - 12, w, ascent, descent, width, bands,
+                        arrows, labels));
                 default -> throw new IllegalStateException();
             }
         }
@@ -199,7 +215,7 @@ public final class LoadingDiagram implements Drawing {
      * width at a time, up to four widths either way. The first place if none is free.
      */
     private static Label place(String text, double x, double baseline, double w, double ascent, double descent, double width,
-                               List<Band> bands, List<Label> placed) {
+                               List<Band> bands, List<Arrow> arrows, List<Label> placed) {
         Label first = null;
         for (double shift : new double[] {0, -0.5, 0.5, -1, 1, -1.5, 1.5, -2, 2, -3, 3, -4, 4}) {
             for (int row = 0; row < 8; row++) {
@@ -212,7 +228,7 @@ public final class LoadingDiagram implements Drawing {
                 if (first == null) {
                     first = candidate;
                 }
-                if (free(candidate.box(), bands, placed)) {
+                if (free(candidate.box(), bands, arrows, placed)) {
                     return candidate;
                 }
             }
@@ -221,14 +237,21 @@ public final class LoadingDiagram implements Drawing {
                 : new Label(text, new Rectangle2D.Double(x, baseline - ascent, w, ascent + descent), (float) x, (float) baseline);
     }
 
-    private static boolean free(Rectangle2D box, List<Band> bands, List<Label> placed) {
+    /** Free of every band and arrow shaft, and at least {@link #GAP} clear of every label placed before. */
+    private static boolean free(Rectangle2D box, List<Band> bands, List<Arrow> arrows, List<Label> placed) {
         for (Band b : bands) {
             if (b.outline().intersects(box)) {
                 return false;
             }
         }
+        for (Arrow a : arrows) {
+            if (a.shaft().intersects(box)) {
+                return false;
+            }
+        }
+        Rectangle2D padded = new Rectangle2D.Double(box.getX() - GAP, box.getY(), box.getWidth() + 2 * GAP, box.getHeight());
         for (Label l : placed) {
-            if (l.box().intersects(box)) {
+            if (l.box().intersects(padded)) {
                 return false;
             }
         }
