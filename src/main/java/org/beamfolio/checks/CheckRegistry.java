@@ -24,7 +24,8 @@ public final class CheckRegistry {
                 new SteelFlexureCheck(),
                 new SteelShearCheck(),
                 new SteelBearingCheck(),
-                new DeflectionCheck()));
+                new DeflectionCheck(),
+                new org.beamfolio.checks.timber.TimberChecks()));
     }
 
     /** This registry with one more check at the end. */

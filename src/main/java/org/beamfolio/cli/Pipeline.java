@@ -95,6 +95,9 @@ final class Pipeline {
             Instability i = e.instability();
             Diagnostic d = new Diagnostic(reading.file(), i.where(), i.keyPath(), i.message());
             return new Solved(null, List.of(), List.of(d.render(reading.source()) + "\n"), Main.BAD_INPUT);
+        } catch (org.beamfolio.checks.timber.TimberInputException e) {
+            Diagnostic d = new Diagnostic(reading.file(), e.where(), e.keyPath(), e.getMessage());
+            return new Solved(null, List.of(), List.of(d.render(reading.source()) + "\n"), Main.BAD_INPUT);
         }
     }
 

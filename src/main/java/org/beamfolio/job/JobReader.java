@@ -23,6 +23,7 @@ import org.beamfolio.model.Material;
 import org.beamfolio.model.Project;
 import org.beamfolio.model.ReportSettings;
 import org.beamfolio.model.Section;
+import org.beamfolio.model.TimberDesign;
 import org.beamfolio.model.SteelDesign;
 import org.beamfolio.units.Dimension;
 import org.beamfolio.units.Lengths;
@@ -167,7 +168,11 @@ public final class JobReader {
                 context.error(at != null ? at.location() : root.location(), "loads",
                         "the job has no loads: add at least one load (or beam.self_weight) for there to be anything to check");
             }
-            CombinationReader.Outcome combos = CombinationReader.read(context, top, LoadCases.of(loads, beam, beamNode, top.optional("loads"), areaLoads), beam);
+            Defined<String> loadCases = LoadCases.of(loads, beam, beamNode, top.optional("loads"), areaLoads);
+            CombinationReader.Outcome combos = CombinationReader.read(context, top, loadCases, beam);
+            TimberDesign timber = TimberDesignReader.read(context, design, loadCases, materials, sections, beam,
+                    beamNode, combos == null ? null : combos.setName());
+            materials = TimberDesignReader.withAdjustedModulus(materials, timber);
             if (combos != null && combos.stressCheck() && beam != null) {
                 requireAllowables(top, materials, beam);
             }
@@ -182,7 +187,7 @@ public final class JobReader {
             }
             return new Job(name, text, sha256(bytes), project, report, materials, sections, beam, loads, cases,
                     combos.setName(), combos.combinations(), combos.pattern(), combos.stressCheck(), combos.deflection(), bytes,
-                    read.takeOff(), steel);
+                    read.takeOff(), steel, timber);
         }
 
         /** A stress check compares with the allowables, so every material on the beam must give them. */
@@ -196,6 +201,13 @@ public final class JobReader {
                 if (m == null) {
                     continue;
                 }
+                YamlNode at = checks instanceof YamlNode.Mapping map && map.entries().containsKey("stress")
+                        ? map.entries().get("stress").value() : checks;
+                if (m.timber() != null) {
+                    context.error(at, "checks.stress", "material \"" + id + "\" is timber: it is checked to the NDS with"
+                            + " design.timber: NDS-2018, not against allowables; set stress: false");
+                    continue;
+                }
                 List<String> missing = new ArrayList<>();
                 if (m.allowableTension() == null) {
                     missing.add("tension");
@@ -207,8 +219,6 @@ public final class JobReader {
                     missing.add("shear");
                 }
                 if (!missing.isEmpty()) {
-                    YamlNode at = checks instanceof YamlNode.Mapping map && map.entries().containsKey("stress")
-                            ? map.entries().get("stress").value() : checks;
                     context.error(at, "checks.stress", "the stress check needs allowable " + String.join(", ", missing)
                             + " stress for material \"" + id + "\" (add materials." + id + ".allowable)");
                 }
@@ -232,6 +242,14 @@ public final class JobReader {
                 String path = "materials." + entry.key();
                 ReadContext.Fields f = context.fields(entry.value(), path);
                 if (f == null) {
+                    continue;
+                }
+                if (f.has("timber")) {
+                    Material timber = TimberMaterialReader.read(context, f, entry.key());
+                    f.rejectUnknown();
+                    if (timber != null) {
+                        result.put(entry.key(), timber);
+                    }
                     continue;
                 }
                 YamlNode gradeNode = f.optional("grade");

@@ -42,6 +42,11 @@ final class SectionReader {
         if (f == null) {
             return null;
         }
+        if (f.has("lumber")) {
+            Section lumber = lumber(context, f, id);
+            f.rejectUnknown();
+            return lumber;
+        }
         boolean flip = false;
         YamlNode flipNode = f.optional("flip");
         if (flipNode != null) {
@@ -75,6 +80,43 @@ final class SectionReader {
         };
         f.rejectUnknown();
         return result == null ? null : new Section(id, result, flip);
+    }
+
+    /** Common nominal sizes, for suggestions when a size is not one the lumber standard dresses. */
+    private static final List<String> COMMON_LUMBER = List.of("2x4", "2x6", "2x8", "2x10", "2x12", "2x14", "3x8", "3x10",
+            "3x12", "4x6", "4x8", "4x10", "4x12", "4x14", "4x16", "6x8", "6x10", "6x12", "6x14", "6x16", "8x10", "8x12", "8x14");
+
+    /** Sawn lumber by nominal size ({@code lumber: 2x10}, {@code plies: 2}): a rectangle of the dressed size. */
+    private static Section lumber(ReadContext c, ReadContext.Fields f, String id) {
+        int plies = 1;
+        YamlNode pliesNode = f.optional("plies");
+        if (pliesNode != null) {
+            Double n = c.number(pliesNode, f.path("plies"));
+            if (n == null) {
+                return null;
+            }
+            if (n != Math.rint(n) || n < 1 || n > 6) {
+                c.error(pliesNode, f.path("plies"), "plies must be a whole number from 1 to 6, got " + ((YamlNode.Scalar) pliesNode).text());
+                return null;
+            }
+            plies = n.intValue();
+        }
+        YamlNode node = f.optional("lumber");
+        String text = c.text(node, f.path("lumber"));
+        if (text == null) {
+            return null;
+        }
+        java.util.Optional<org.beamfolio.catalogue.Lumber> lumber = org.beamfolio.catalogue.Lumber.parse(text, plies);
+        if (lumber.isEmpty()) {
+            String hint = org.beamfolio.units.Suggest.closest(text.strip().toLowerCase(java.util.Locale.ROOT), COMMON_LUMBER)
+                    .map(s -> "; did you mean \"" + s + "\"?").orElse("");
+            c.error(node, f.path("lumber"), "no dressed size for nominal \"" + text + "\"" + hint
+                    + " (a nominal thickness x width such as 2x10 or 4x12, thickness 2 to 12 in not above the width,"
+                    + " width to 24 in; for other sizes give shape: rectangle)");
+            return null;
+        }
+        org.beamfolio.catalogue.Lumber l = lumber.get();
+        return new Section(id, new SectionShape.Rectangle(l.breadth(), l.depth()), false, l);
     }
 
     private static Double len(ReadContext c, ReadContext.Fields f, String key) {

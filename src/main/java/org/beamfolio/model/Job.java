@@ -12,13 +12,14 @@ import java.util.Map;
  * @param takeOff where the line loads that came from area loads came from, and the live load
  *        reductions taken (those line loads are already in {@code loads}, reduced)
  * @param steelDesign steel design to AISC 360 ({@code design.steel}), or null when the job asks for none
+ * @param timber timber design to the NDS ({@code design.timber}), or null when the job asks for none
  */
 public record Job(String name, String sourceText, String sha256, Project project, ReportSettings report,
                   Map<String, Material> materials, Map<String, Section> sections, Beam beam,
                   List<Load> loads, Map<String, String> cases, String combinationSet,
                   List<Combination> combinations, List<String> pattern, boolean stressCheck,
                   List<DeflectionLimit> deflectionLimits, byte[] sourceBytes,
-                  org.beamfolio.loads.TakeOff takeOff, SteelDesign steelDesign) {
+                  org.beamfolio.loads.TakeOff takeOff, SteelDesign steelDesign, TimberDesign timber) {
     /** A job of line loads only. */
     public Job(String name, String sourceText, String sha256, Project project, ReportSettings report,
                Map<String, Material> materials, Map<String, Section> sections, Beam beam,
@@ -26,7 +27,18 @@ public record Job(String name, String sourceText, String sha256, Project project
                List<Combination> combinations, List<String> pattern, boolean stressCheck,
                List<DeflectionLimit> deflectionLimits, byte[] sourceBytes) {
         this(name, sourceText, sha256, project, report, materials, sections, beam, loads, cases, combinationSet,
-                combinations, pattern, stressCheck, deflectionLimits, sourceBytes, org.beamfolio.loads.TakeOff.EMPTY, null);
+                combinations, pattern, stressCheck, deflectionLimits, sourceBytes, org.beamfolio.loads.TakeOff.EMPTY, null, null);
+    }
+
+    /** A job without timber design. */
+    public Job(String name, String sourceText, String sha256, Project project, ReportSettings report,
+               Map<String, Material> materials, Map<String, Section> sections, Beam beam,
+               List<Load> loads, Map<String, String> cases, String combinationSet,
+               List<Combination> combinations, List<String> pattern, boolean stressCheck,
+               List<DeflectionLimit> deflectionLimits, byte[] sourceBytes,
+               org.beamfolio.loads.TakeOff takeOff, SteelDesign steelDesign) {
+        this(name, sourceText, sha256, project, report, materials, sections, beam, loads, cases, combinationSet,
+                combinations, pattern, stressCheck, deflectionLimits, sourceBytes, takeOff, steelDesign, null);
     }
 
     public Job {

@@ -10,7 +10,7 @@ import java.util.List;
 public record ReportModel(Sheet sheet, Cover cover, Revision revision, Basis basis, Loading loading, List<CombinationSheet> analyses,
                           Envelope envelope, Reactions reactions, Stresses stresses, Checks checks, List<String> cautions,
                           List<String> reviewChecklist, List<List<String>> history, Appendix appendix, AreaLoads areaLoads,
-                          SteelSheet steel) {
+                          SteelSheet steel, Timber timber) {
 
     /** The title block on every sheet. */
     public record Sheet(String title, String number, String subject, String revision, String preparedBy, String date,
@@ -85,6 +85,13 @@ public record ReportModel(Sheet sheet, Cover cover, Revision revision, Basis bas
      */
     public record SteelSheet(String title, List<Row> member, Table catalogueRow, Table compactness, Table segments,
                              String flexureNote, List<Equation> flexure, List<Equation> shear, List<Equation> bearing) {}
+
+    /**
+     * The timber design sheet (null without {@code design.timber}): basis, reference values and
+     * source, the governing bending check's factors and Fb' worked, and every combination's checks.
+     */
+    public record Timber(List<String> basis, Table reference, String source, Table factors, List<Equation> fbPrime,
+                         Table bending, Table shear, Table bearing, Table longTerm, String shearNote, String creep) {}
 
     public record Appendix(List<Row> lines, String digest, String toolVersion, String attachment) {}
 }

@@ -60,7 +60,8 @@ final class ReportModelBuilder {
         ReportModel.SteelSheet steel = new SteelPart(result, t).build();
         ReportModel model = new ReportModel(sheet, cover(checks, analyses, revision != null, steel != null), revision, basis(),
                 loading.build(), analyses, envelope, new ReactionsPart(result, t).build(), stresses, checks(checks), cautions(),
-                reviewChecklist(), history(), appendix(), new TakeOffPart(job.takeOff(), job.report().units(), t).build(), steel);
+                reviewChecklist(), history(), appendix(), new TakeOffPart(job.takeOff(), job.report().units(), t).build(), steel,
+                new TimberPart(result, t).build());
         return new Built(model, drawings);
     }
 
@@ -118,6 +119,9 @@ final class ReportModelBuilder {
         contents.add(new ReportModel.Row("Section properties and stresses", "stresses"));
         if (steel) {
             contents.add(new ReportModel.Row("Steel design", "steel"));
+        }
+        if (result.job().timber() != null) {
+            contents.add(new ReportModel.Row("Timber design to the NDS", "timber"));
         }
         contents.add(new ReportModel.Row("Checks and summary", "checks"));
         contents.add(new ReportModel.Row("Cautions", "cautions"));

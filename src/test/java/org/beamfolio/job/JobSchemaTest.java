@@ -116,7 +116,7 @@ class JobSchemaTest {
             "us-misspelt-kip", "us-feet-and-inches-as-force", "us-fraction-zero-denominator", "follow-on-material-fails",
             "follow-on-load-fails", "area-pressure-as-line-load", "area-line-load-as-pressure", "area-width-wrong-dimension",
             "area-varying-width-wrong-dimension", "area-reducible-dead-load", "area-kll-not-in-table", "area-load-with-case",
-            "area-width-on-line-load");
+            "area-width-on-line-load", "timber-missing-reference-value", "timber-fb-neg-on-sawn", "timber-lrfd");
 
     @Test
     void theSchemaAndTheToolRejectTheSameMistakes() throws Exception {

@@ -1,5 +1,12 @@
 package org.beamfolio.design.timber;
 
+import org.beamfolio.model.timber.TimberKind;
+import org.beamfolio.model.timber.TimberService;
+import org.beamfolio.model.timber.TimberValues;
+import org.beamfolio.model.timber.LoadDuration;
+import org.beamfolio.model.timber.ServiceFactors;
+import org.beamfolio.model.timber.Factor;
+import org.beamfolio.model.timber.Property;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -44,14 +51,20 @@ public final class AdjustedValues {
     public Bending bending(LoadDuration cd, boolean topInTension, double ply, Double effectiveLength,
                            double zeroMomentLength) {
         double fb = values.fbFor(topInTension);
+        TimberKind kind = values.kind();
+        // the factors of Fb* (NDS 3.3.3.8): every applicable factor but Cfu, CV and CL, by the product's table
         List<Factor> factors = new ArrayList<>();
         factors.add(new Factor("CD", cd.factor(), LoadDuration.CLAUSE, cd.key().replace('_', ' ')));
         Factor cf = SizeFactor.of(values, ply, d);
         factors.add(ServiceFactors.wetService(values, Property.FB, fb * cf.value(), service));
         factors.add(ServiceFactors.temperature(Property.FB, service));
-        factors.add(cf);
-        factors.add(ServiceFactors.incising(values, Property.FB, service));
-        factors.add(ServiceFactors.repetitive(values, service));
+        if (kind == TimberKind.SAWN) {
+            factors.add(cf);
+            factors.add(ServiceFactors.incising(values, Property.FB, service));
+        }
+        if (kind != TimberKind.GLULAM) {
+            factors.add(ServiceFactors.repetitive(values, service));
+        }
         double fbStar = fb;
         for (Factor f : factors) {
             fbStar *= f.value();
@@ -66,17 +79,23 @@ public final class AdjustedValues {
             stability = BeamStability.of(effectiveLength, b, d, fbStar, eMin());
             cl = stability.factor(fbStar);
         }
-        Factor cv = VolumeFactor.of(values, zeroMomentLength, b, d);
+        factors.add(flatUse());
+        factors.add(cl);
         double adjusted = fbStar;
-        if (values.kind() == TimberKind.GLULAM) {
-            factors.add(cl);
+        if (kind == TimberKind.GLULAM) {
+            Factor cv = VolumeFactor.of(values, zeroMomentLength, b, d);
             factors.add(cv);
             adjusted *= Math.min(cl.value(), cv.value());
         } else {
-            factors.add(cl);
             adjusted *= cl.value();
         }
         return new Bending(fb, fbStar, adjusted, List.copyOf(factors), stability, topInTension);
+    }
+
+    /** Cfu = 1.0: the beam is loaded on its narrow face (edgewise), the only orientation modelled. */
+    private Factor flatUse() {
+        return Factor.unity("Cfu", values.kind() == TimberKind.GLULAM ? "NDS 2018 5.3.7" : "NDS 2018 4.3.7",
+                "loaded edgewise (on the narrow face): flat use factor not applied");
     }
 
     public Adjusted shear(LoadDuration cd) {
@@ -124,6 +143,16 @@ public final class AdjustedValues {
      */
     public record Bending(double reference, double fbStar, double value, List<Factor> factors,
                           BeamStability.Result stability, boolean topInTension) {
+        /** Whether the factor applies to this product (each product's table lists its own). */
+        public boolean has(String symbol) {
+            return factors.stream().anyMatch(f -> f.symbol().equals(symbol));
+        }
+
+        /** The lesser of CL and CV for glulam (NDS 5.3.6), else CL: the one that enters Fb'. */
+        public String governingStability() {
+            return has("CV") && factor("CV") < factor("CL") ? "CV" : "CL";
+        }
+
         public double factor(String symbol) {
             for (Factor f : factors) {
                 if (f.symbol().equals(symbol)) {

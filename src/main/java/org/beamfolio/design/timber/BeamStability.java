@@ -1,5 +1,7 @@
 package org.beamfolio.design.timber;
 
+import org.beamfolio.model.timber.ServiceFactors;
+import org.beamfolio.model.timber.Factor;
 import java.util.Locale;
 
 /**

@@ -1,5 +1,6 @@
 package org.beamfolio.design.timber;
 
+import org.beamfolio.model.timber.Factor;
 import java.util.Locale;
 
 /**

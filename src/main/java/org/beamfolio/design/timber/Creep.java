@@ -1,5 +1,8 @@
 package org.beamfolio.design.timber;
 
+import org.beamfolio.model.timber.TimberService;
+import org.beamfolio.model.timber.Factor;
+
 /**
  * Long-term deflection with creep, NDS 2018 3.5.2 (Eq. 3.5-1): delta_T = Kcr delta_LT + delta_ST,
  * Kcr = 1.5 for seasoned lumber, glulam and SCL in dry service, 2.0 in wet service (and for

@@ -1,5 +1,8 @@
 package org.beamfolio.design.timber;
 
+import org.beamfolio.model.timber.TimberKind;
+import org.beamfolio.model.timber.TimberValues;
+import org.beamfolio.model.timber.Factor;
 import java.util.Locale;
 
 /**

@@ -1,5 +1,12 @@
 package org.beamfolio.design.timber;
 
+import org.beamfolio.model.timber.TimberKind;
+import org.beamfolio.model.timber.SizeClass;
+import org.beamfolio.model.timber.Temperature;
+import org.beamfolio.model.timber.TimberService;
+import org.beamfolio.model.timber.TimberValues;
+import org.beamfolio.model.timber.LoadDuration;
+import org.beamfolio.model.timber.ServiceFactors;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;

@@ -1,4 +1,4 @@
-package org.beamfolio.design.timber;
+package org.beamfolio.model.timber;
 
 /**
  * Service conditions of a timber member (job key `design.timber_service`).

@@ -1,4 +1,4 @@
-package org.beamfolio.design.timber;
+package org.beamfolio.model.timber;
 
 /** The reference design values a beam uses, as the NDS tables name them. */
 public enum Property {

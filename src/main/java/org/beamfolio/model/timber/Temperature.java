@@ -1,4 +1,4 @@
-package org.beamfolio.design.timber;
+package org.beamfolio.model.timber;
 
 /** Sustained service temperature ranges of NDS 2018 Table 2.3.3. */
 public enum Temperature {

@@ -1,4 +1,4 @@
-package org.beamfolio.design.timber;
+package org.beamfolio.model.timber;
 
 import java.util.Locale;
 import java.util.Map;

@@ -1,4 +1,4 @@
-package org.beamfolio.design.timber;
+package org.beamfolio.model.timber;
 
 /**
  * One adjustment factor as the package prints it: its NDS symbol, its value, the clause or table
@@ -11,7 +11,7 @@ public record Factor(String symbol, double value, String clause, String basis) {
         }
     }
 
-    static Factor unity(String symbol, String clause, String basis) {
+    public static Factor unity(String symbol, String clause, String basis) {
         return new Factor(symbol, 1.0, clause, basis);
     }
 }

@@ -1,4 +1,4 @@
-package org.beamfolio.design.timber;
+package org.beamfolio.model.timber;
 
 /**
  * Reference design values given by the engineer, SI (Pa), with their source as the engineer

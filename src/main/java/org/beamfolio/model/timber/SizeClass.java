@@ -1,4 +1,4 @@
-package org.beamfolio.design.timber;
+package org.beamfolio.model.timber;
 
 /**
  * Which size factor rule applies to sawn lumber: dimension lumber 2 to 4 in thick (NDS Supplement

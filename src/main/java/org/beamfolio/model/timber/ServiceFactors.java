@@ -1,4 +1,4 @@
-package org.beamfolio.design.timber;
+package org.beamfolio.model.timber;
 
 /**
  * The wet service (CM), temperature (Ct) and incising (Ci) factors. Values are those of NDS 2018
@@ -9,7 +9,7 @@ public final class ServiceFactors {
     private ServiceFactors() {}
 
     /** psi in Pa, exact (1 lbf/in^2 = 4.4482216152605 N / 0.00064516 m^2). */
-    static final double PSI = 4.4482216152605 / 0.00064516;
+    public static final double PSI = 4.4482216152605 / 0.00064516;
 
     public static Factor wetService(TimberValues v, Property p, double fbTimesCf, TimberService s) {
         if (!s.wet()) {
@@ -45,6 +45,12 @@ public final class ServiceFactors {
             case FC_PERP -> 0.67;
             case E, EMIN -> 0.9;
         }, "NDS Supplement Table 4A, wet service", "wet service, dimension lumber");
+    }
+
+    /** CM Ct Ci on E: the factor from E to E', the modulus deflections are computed with. */
+    public static double modulusFactor(TimberValues v, TimberService s) {
+        return wetService(v, Property.E, Double.NaN, s).value() * temperature(Property.E, s).value()
+                * incising(v, Property.E, s).value();
     }
 
     public static Factor temperature(Property p, TimberService s) {

@@ -1,4 +1,4 @@
-package org.beamfolio.design.timber;
+package org.beamfolio.model.timber;
 
 /** The product families the NDS adjusts differently: sawn lumber (chapter 4), glulam (5), SCL (8). */
 public enum TimberKind {
