@@ -22,10 +22,6 @@ final class BandedSolver implements CaseSolver.Assembly {
         this.restrained = new boolean[n];
     }
 
-    int size() {
-        return n;
-    }
-
     @Override
     public void add(int i, int j, double value) {
         int r = Math.min(i, j);
@@ -34,11 +30,6 @@ final class BandedSolver implements CaseSolver.Assembly {
             throw new IllegalArgumentException("entry outside the band: " + i + ", " + j);
         }
         band[r][k] += value;
-    }
-
-    double get(int i, int j) {
-        int k = Math.abs(i - j);
-        return k > bandwidth ? 0 : band[Math.min(i, j)][k];
     }
 
     /** Replaces row and column i by a diagonal entry alone, so that d[i] = 0: a restrained displacement. */

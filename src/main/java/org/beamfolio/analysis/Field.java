@@ -170,12 +170,6 @@ public final class Field {
         return extremes(null, this, this::candidates)[1];
     }
 
-    /** The largest absolute value, its sign kept. */
-    public Extreme maxAbs() {
-        Extreme[] range = extremes(null, this, this::candidates);
-        return Math.abs(range[1].value()) > Math.abs(range[0].value()) ? range[1] : range[0];
-    }
-
     /** Where a piece can take its extremes: its two ends and the real roots of its derivative (local s). */
     public double[] candidates(int piece) {
         double[] own = new double[STRIDE];

@@ -4,7 +4,7 @@ import java.util.Arrays;
 
 /** A real polynomial c0 + c1 s + c2 s^2 + ..., immutable. Beam fields are polynomials of degree five or less. */
 public final class Polynomial {
-    public static final Polynomial ZERO = new Polynomial(new double[] {0});
+    private static final Polynomial ZERO = new Polynomial(new double[] {0});
 
     private final double[] c;
 
@@ -87,11 +87,6 @@ public final class Polynomial {
             r[i + 1] = c[i] / (i + 1);
         }
         return new Polynomial(r);
-    }
-
-    /** The definite integral from 0 to s. */
-    public double integrate(double s) {
-        return integral(0).at(s);
     }
 
     @Override

@@ -38,10 +38,6 @@ final class Superposition {
         factors[count++] = factor;
     }
 
-    int size() {
-        return count;
-    }
-
     /** The whole response: every field summed, one array per field. */
     Response response(StructureModel model, String name) {
         return Response.linear(name, terms, factors, count, model.supports().size(), model.elementStarts(), model.elementEnds());

@@ -101,14 +101,6 @@ final class Pipeline {
         }
     }
 
-    Outcome build(Path file, Path outDir) {
-        return build(file, outDir, false);
-    }
-
-    Outcome build(Path file, Path outDir, boolean csv) {
-        return build(file, outDir, csv, null);
-    }
-
     /** With {@code previous}, the package compares this job with that earlier revision of it. */
     Outcome build(Path file, Path outDir, boolean csv, Path previous) {
         Solved solved = solve(file);

@@ -181,11 +181,6 @@ public final class Units {
         return Collections.unmodifiableList(symbols);
     }
 
-    /** Every accepted symbol, for suggestions. */
-    public static List<String> allSymbols() {
-        return List.copyOf(BY_SYMBOL.keySet());
-    }
-
     /** A case-insensitive match, for a "did you mean" when the case is all that is wrong. */
     public static Optional<Unit> findIgnoringCase(String symbol) {
         String wanted = symbol.replace('-', '*').toLowerCase(Locale.ROOT);

@@ -19,8 +19,4 @@ final class Style {
     static Font font(float size) {
         return new Font("DejaVu Sans", Font.PLAIN, 1).deriveFont(size);
     }
-
-    static Font bold(float size) {
-        return new Font("DejaVu Sans", Font.BOLD, 1).deriveFont(size);
-    }
 }

@@ -79,20 +79,11 @@ public final class PdfRenderer {
         org.jfree.chart.text.TextUtils.setUseDrawRotatedStringWorkaround(false);
     }
 
-    public byte[] render(String xhtml, Map<String, Drawing> drawings, Attachment attachment, String isoDate) {
-        return render(xhtml, drawings, attachment, isoDate, true, "");
-    }
-
     /**
      * @param archival PDF/A-3b (ISO 19005-3): output intent, XMP, the job as an associated file
      * @param title the document title, repeated in the XMP metadata
+     * @param checksFlag the package's {@link ChecksFlag}, written to the document information; null for none
      */
-    public byte[] render(String xhtml, Map<String, Drawing> drawings, Attachment attachment, String isoDate, boolean archival,
-                         String title) {
-        return render(xhtml, drawings, attachment, isoDate, archival, title, null);
-    }
-
-    /** @param checksFlag the package's {@link ChecksFlag}, written to the document information; null for none */
     public byte[] render(String xhtml, Map<String, Drawing> drawings, Attachment attachment, String isoDate, boolean archival,
                          String title, String checksFlag) {
         try {
