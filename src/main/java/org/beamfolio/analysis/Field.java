@@ -1,5 +1,9 @@
 package org.beamfolio.analysis;
 
+import java.util.ArrayList;
+import java.util.List;
+import org.beamfolio.units.RoundOff;
+
 /**
  * A field along the beam (shear, moment, slope, deflection, a stress) as polynomial pieces, one
  * per element, each in the local coordinate s = x - start. Jumps between pieces are kept: the
@@ -210,7 +214,7 @@ public final class Field {
      * The largest and smallest of {@code shape} scaled piece by piece ({@code factors}, or 1),
      * evaluated at the given candidate points of each piece: exact when the candidates are those
      * of {@code shape} (a stress is a scaled moment, and shares the moment's candidates). Values
-     * within 1e-10 of the largest magnitude are the round-off of a zero and are reported as zero.
+     * that are the round-off of a zero ({@link RoundOff}) are reported as zero.
      */
     public Extreme[] extremes(double[] factors, Field shape, java.util.function.IntFunction<double[]> candidates) {
         double bestMax = Double.NEGATIVE_INFINITY;
@@ -233,13 +237,45 @@ public final class Field {
                 }
             }
         }
-        if (Math.abs(bestMax) <= 1e-10 * scale) {
-            bestMax = 0.0;
+        return new Extreme[] {new Extreme(RoundOff.clean(bestMax, scale), atMax, null), new Extreme(RoundOff.clean(bestMin, scale), atMin, null)};
+    }
+
+    /**
+     * The value of largest magnitude, its sign kept, on the pieces that lie within [from, to]
+     * (a span or an overhang), exact as {@link #max()}; the first of equal magnitudes stays, and
+     * zero at {@code from} where every value there is zero.
+     */
+    public Extreme largestWithin(double from, double to) {
+        Extreme best = new Extreme(0, from, null);
+        for (int i = 0; i < starts.length; i++) {
+            if (starts[i] >= from - 1e-12 && ends[i] <= to + 1e-12) {
+                for (int sign : new int[] {1, -1}) {
+                    Extreme e = extremeOf(i, sign);
+                    if (Math.abs(e.value()) > Math.abs(best.value())) {
+                        best = e;
+                    }
+                }
+            }
         }
-        if (Math.abs(bestMin) <= 1e-10 * scale) {
-            bestMin = 0.0;
+        return best;
+    }
+
+    /**
+     * Where the field is zero inside its pieces, left to right: the real roots of each piece,
+     * leaving out those within 1e-12 of the piece's length of its ends (a node, already a key
+     * point, where the root is the round-off of the end).
+     */
+    public List<Double> zeroesInside() {
+        List<Double> out = new ArrayList<>();
+        for (int i = 0; i < starts.length; i++) {
+            double length = ends[i] - starts[i];
+            for (double s : Roots.in(piece(i), 0, length)) {
+                if (s > 1e-12 * length && s < length * (1 - 1e-12)) {
+                    out.add(starts[i] + s);
+                }
+            }
         }
-        return new Extreme[] {new Extreme(bestMax, atMax, null), new Extreme(bestMin, atMin, null)};
+        return out;
     }
 
     /** The largest (sign 1) or smallest (sign -1) value on one piece, exact as {@link #max()}. */

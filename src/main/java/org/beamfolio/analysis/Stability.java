@@ -9,7 +9,6 @@ import org.apache.commons.math3.linear.SingularValueDecomposition;
 import org.beamfolio.model.Beam;
 import org.beamfolio.model.Hinge;
 import org.beamfolio.model.Support;
-import org.beamfolio.model.SupportKind;
 import org.beamfolio.units.Lengths;
 
 /**
@@ -48,7 +47,7 @@ public final class Stability {
                 translation[2 + h] = Math.max(0, s.at() - hinges.get(h).at()) / length;
             }
             rows.add(translation);
-            if (restrainsRotation(s.kind())) {
+            if (s.kind().restrainsRotation()) {
                 double[] rotation = new double[columns];
                 rotation[1] = 1;
                 for (int h = 0; h < hinges.size(); h++) {
@@ -72,10 +71,6 @@ public final class Stability {
         }
         double[] motion = svd.getV().getColumn(sv.length - 1);
         return Optional.of(describe(beam, motion, lengths));
-    }
-
-    static boolean restrainsRotation(SupportKind kind) {
-        return kind instanceof SupportKind.Fixed || (kind instanceof SupportKind.Spring s && s.kr() > 0);
     }
 
     /** Names the first rigid part that moves, and the point it turns about or that it slides. */

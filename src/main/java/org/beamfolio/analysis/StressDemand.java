@@ -23,6 +23,11 @@ public record StressDemand(Kind kind, CombinationResult combination, int element
     /** The side of a jump: LEFT is just left of {@code at}, RIGHT just right; NONE where the field is continuous. */
     public enum Side { NONE, LEFT, RIGHT }
 
+    /** The stress as an extreme of its combination: the value the checks, the worked steps and every sheet read. */
+    public Extreme extreme() {
+        return new Extreme(stress, at, combination.name());
+    }
+
     /** The magnitude compared with the allowable: the tension or compression, zero when there is none. */
     public double demand() {
         return switch (kind) {

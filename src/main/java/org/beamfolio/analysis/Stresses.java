@@ -1,6 +1,7 @@
 package org.beamfolio.analysis;
 
 import org.beamfolio.section.SectionProperties;
+import org.beamfolio.units.RoundOff;
 
 /**
  * Stresses from a response, element by element with each element's section: fibre stress
@@ -99,8 +100,7 @@ public final class Stresses {
 
     /**
      * The largest and smallest of the values offered and where, as {@link Field#extremes}: the
-     * first of equal values wins, and values within 1e-10 of the largest magnitude are the
-     * round-off of a zero and read as zero.
+     * first of equal values wins, and the round-off of a zero ({@link RoundOff}) reads as zero.
      */
     private static final class Range {
         private double max = Double.NEGATIVE_INFINITY;
@@ -127,11 +127,11 @@ public final class Stresses {
         }
 
         Extreme max() {
-            return new Extreme(Math.abs(max) <= 1e-10 * scale ? 0.0 : max, atMax, null);
+            return new Extreme(RoundOff.clean(max, scale), atMax, null);
         }
 
         Extreme min() {
-            return new Extreme(Math.abs(min) <= 1e-10 * scale ? 0.0 : min, atMin, null);
+            return new Extreme(RoundOff.clean(min, scale), atMin, null);
         }
     }
 }

@@ -16,14 +16,13 @@ import java.util.concurrent.Callable;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
-import picocli.CommandLine.Parameters;
 
 /** {@code build JOB... [--out DIR]}: writes a PDF package and a results file for each job. */
 @Command(name = "build", mixinStandardHelpOptions = true,
         description = "Solve each job and write DIR/<job>.pdf and DIR/<job>.results.json.")
 final class BuildCommand implements Callable<Integer> {
-    @Parameters(arity = "1..*", paramLabel = "JOB", description = "job files, or folders of *.yaml job files")
-    List<Path> jobs;
+    @CommandLine.Mixin
+    JobFiles jobs;
 
     @Option(names = "--out", paramLabel = "DIR", description = "where to write the packages (default: the current folder)")
     Path out = Path.of(".");
@@ -45,9 +44,8 @@ final class BuildCommand implements Callable<Integer> {
     public Integer call() throws IOException {
         PrintWriter stdout = spec.commandLine().getOut();
         PrintWriter stderr = spec.commandLine().getErr();
-        List<Path> files = JobFiles.expand(jobs);
+        List<Path> files = jobs.expand(stderr);
         if (files.isEmpty()) {
-            stderr.println("beamfolio: no job files found in " + jobs);
             return Main.BAD_INPUT;
         }
         if (Files.exists(out) && !Files.isDirectory(out)) {

@@ -7,14 +7,13 @@ import java.util.List;
 import java.util.concurrent.Callable;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
-import picocli.CommandLine.Parameters;
 
 /** {@code check JOB...}: validates and solves each job and prints a summary; writes nothing. */
 @Command(name = "check", mixinStandardHelpOptions = true,
         description = "Validate and solve each job and print a one-screen summary; no files are written.")
 final class CheckCommand implements Callable<Integer> {
-    @Parameters(arity = "1..*", paramLabel = "JOB", description = "job files, or folders of *.yaml job files")
-    List<Path> jobs;
+    @CommandLine.Mixin
+    JobFiles jobs;
 
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
@@ -23,9 +22,8 @@ final class CheckCommand implements Callable<Integer> {
     public Integer call() throws IOException {
         PrintWriter stdout = spec.commandLine().getOut();
         PrintWriter stderr = spec.commandLine().getErr();
-        List<Path> files = JobFiles.expand(jobs);
+        List<Path> files = jobs.expand(stderr);
         if (files.isEmpty()) {
-            stderr.println("beamfolio: no job files found in " + jobs);
             return Main.BAD_INPUT;
         }
         ExitStatus status = new ExitStatus();

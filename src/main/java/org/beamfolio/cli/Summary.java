@@ -52,8 +52,7 @@ final class Summary {
         // the governing stresses the checks and the worked steps read
         for (StressDemand d : java.util.Arrays.asList(r.stresses().tension(), r.stresses().compression(), r.stresses().shear())) {
             if (d != null) {
-                line(out, "stress, " + d.kind().name().toLowerCase(java.util.Locale.ROOT),
-                        new Extreme(d.stress(), d.at(), d.combination().name()), u.stress(), u);
+                line(out, "stress, " + d.kind().name().toLowerCase(java.util.Locale.ROOT), d.extreme(), u.stress(), u);
             }
         }
         for (CheckOutcome c : checks) {

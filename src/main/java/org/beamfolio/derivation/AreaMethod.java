@@ -6,9 +6,9 @@ import java.util.TreeSet;
 import org.beamfolio.analysis.AnalysisResult;
 import org.beamfolio.analysis.CombinationResult;
 import org.beamfolio.analysis.Field;
-import org.beamfolio.analysis.Roots;
 import org.beamfolio.model.Load;
 import org.beamfolio.units.Numbers;
+import org.beamfolio.units.RoundOff;
 
 /**
  * Shear and moment by the area method between key points: the change in shear over a stretch is
@@ -40,22 +40,8 @@ final class AreaMethod {
         for (Load l : loads) {
             xs.addAll(l.positions());
         }
-        xs.addAll(zeroShear());
+        xs.addAll(combination.response().shear().zeroesInside());
         points = new ArrayList<>(xs);
-    }
-
-    private List<Double> zeroShear() {
-        Field v = combination.response().shear();
-        List<Double> out = new ArrayList<>();
-        for (int i = 0; i < v.size(); i++) {
-            double length = v.end(i) - v.start(i);
-            for (double s : Roots.in(v.piece(i), 0, length)) {
-                if (s > 1e-12 * length && s < length * (1 - 1e-12)) {
-                    out.add(v.start(i) + s);
-                }
-            }
-        }
-        return out;
     }
 
     /** Downward line load intensity just right of x, and its slope (the sum of the loads there). */
@@ -74,7 +60,7 @@ final class AreaMethod {
     /** A step for each point of zero shear: V1 - w s - k s^2 / 2 = 0 from the key point before it. */
     void zeroShearSteps() {
         Field v = combination.response().shear();
-        for (double x0 : zeroShear()) {
+        for (double x0 : v.zeroesInside()) {
             double x1 = points.stream().filter(p -> p < x0).mapToDouble(Double::doubleValue).max().orElse(0);
             double v1 = v.at(x1);
             double[] wk = intensity(x1);
@@ -140,6 +126,6 @@ final class AreaMethod {
     }
 
     private static String fmt(double value, double scale) {
-        return Numbers.format(Math.abs(value) <= 1e-10 * scale ? 0 : value);
+        return Numbers.format(RoundOff.clean(value, scale));
     }
 }

@@ -64,7 +64,7 @@ final class DeflectionSteps {
                 steps.note("Deflection in " + span.label() + ": no closed form covers this loading and support, so the elastic curve is "
                         + "integrated below at the point of the largest deflection", "exact integration of the elastic curve");
             }
-            Extreme worst = largestIn(deflection, span.from(), span.to());
+            Extreme worst = deflection.largestWithin(span.from(), span.to());
             elasticCurve("Largest deflection in " + span.label() + ", where the slope is zero (a root of the slope polynomial) or at an end",
                     worst.at(), span);
         }
@@ -199,20 +199,5 @@ final class DeflectionSteps {
 
     private static String plain(double v) {
         return org.beamfolio.units.Numbers.format(v);
-    }
-
-    static Extreme largestIn(Field f, double from, double to) {
-        Extreme best = new Extreme(0, from, null);
-        for (int i = 0; i < f.size(); i++) {
-            if (f.start(i) >= from - 1e-12 && f.end(i) <= to + 1e-12) {
-                for (int sign : new int[] {1, -1}) {
-                    Extreme e = f.extremeOf(i, sign);
-                    if (Math.abs(e.value()) > Math.abs(best.value())) {
-                        best = e;
-                    }
-                }
-            }
-        }
-        return best;
     }
 }

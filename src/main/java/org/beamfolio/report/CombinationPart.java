@@ -1,5 +1,7 @@
 package org.beamfolio.report;
 
+import static org.beamfolio.units.RoundOff.clean;
+
 import org.beamfolio.units.Numbers;
 import java.util.ArrayList;
 import java.util.List;
@@ -11,7 +13,6 @@ import org.beamfolio.analysis.Extreme;
 import org.beamfolio.analysis.Extremes;
 import org.beamfolio.analysis.Field;
 import org.beamfolio.analysis.Response;
-import org.beamfolio.analysis.Roots;
 import org.beamfolio.derivation.Derivation;
 import org.beamfolio.derivation.Derivations;
 import org.beamfolio.derivation.FactoredLoads;
@@ -178,7 +179,7 @@ final class CombinationPart {
         return marks;
     }
 
-    /** Supports, hinges, load points and ends, and points of zero shear (each from its root). */
+    /** Supports, hinges, load points and ends, and the points of zero shear inside an element (each from its root). */
     private ReportModel.Table keyPoints(Response r) {
         TreeSet<Double> xs = new TreeSet<>();
         double length = result.job().beam().length();
@@ -190,14 +191,7 @@ final class CombinationPart {
             xs.addAll(load.positions());
         }
         Field v = r.shear();
-        TreeSet<Double> zeroShear = new TreeSet<>();
-        for (int i = 0; i < v.size(); i++) {
-            for (double s : Roots.in(v.piece(i), 0, v.end(i) - v.start(i))) {
-                if (s > 0 && s < v.end(i) - v.start(i)) {
-                    zeroShear.add(v.start(i) + s);
-                }
-            }
-        }
+        TreeSet<Double> zeroShear = new TreeSet<>(v.zeroesInside());
         xs.addAll(zeroShear);
         List<List<String>> rows = new ArrayList<>();
         double vScale = scale(v);
@@ -220,11 +214,6 @@ final class CombinationPart {
 
     private static double scale(Field f) {
         return Math.max(Math.abs(f.max().value()), Math.abs(f.min().value()));
-    }
-
-    /** Round-off (a value below 1e-10 of the largest of its kind) printed as the zero it stands for. */
-    private static double clean(double value, double scale) {
-        return Texts.clean(value, scale);
     }
 
     /** The equilibrium check of every combination and arrangement, one row each. */

@@ -49,9 +49,10 @@ final class RevisionPart {
             results.add(row("Largest hogging moment", x.momentMin(), y.momentMin(), t.units().moment()));
             results.add(row("Largest shear", larger(x.shearMax(), x.shearMin()), larger(y.shearMax(), y.shearMin()), t.units().force()));
             results.add(row("Largest deflection", x.deflectionMax(), y.deflectionMax(), t.units().deflection()));
-            results.add(row("Largest tension", larger(x.stressTopMax(), x.stressBottomMax()), larger(y.stressTopMax(), y.stressBottomMax()),
+            // the governing stresses, as the checks and the worked steps read them
+            results.add(row("Largest tension", before.stresses().tension().extreme(), now.stresses().tension().extreme(),
                     t.units().stress()));
-            results.add(row("Largest compression", smaller(x.stressTopMin(), x.stressBottomMin()), smaller(y.stressTopMin(), y.stressBottomMin()),
+            results.add(row("Largest compression", before.stresses().compression().extreme(), now.stresses().compression().extreme(),
                     t.units().stress()));
         }
         List<List<String>> checks = new ArrayList<>();
@@ -79,10 +80,6 @@ final class RevisionPart {
 
     private static Extreme larger(Extreme a, Extreme b) {
         return Math.abs(a.value()) >= Math.abs(b.value()) ? a : b;
-    }
-
-    private static Extreme smaller(Extreme a, Extreme b) {
-        return a.value() <= b.value() ? a : b;
     }
 
     private List<String> row(String label, Extreme old, Extreme neu, Unit unit) {

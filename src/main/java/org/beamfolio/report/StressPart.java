@@ -7,6 +7,7 @@ import org.beamfolio.analysis.AnalysisResult;
 import org.beamfolio.model.Section;
 import org.beamfolio.model.SectionShape;
 import org.beamfolio.section.SectionProperties;
+import org.beamfolio.units.RoundOff;
 
 /**
  * Section properties (with the parallel axis table for sections built of rectangles) and the
@@ -85,7 +86,7 @@ final class StressPart {
             double sumI = 0;
             for (SectionProperties.Part p : s.parts()) {
                 // A·d² of a part centred on the axis is zero; its round-off is printed as such
-                double transfer = Texts.clean(p.transferInertia(), s.inertia());
+                double transfer = RoundOff.clean(p.transferInertia(), s.inertia());
                 parts.add(List.of(t.plain(p.b(), u.sectionLength()) + " × " + t.plain(p.h(), u.sectionLength()),
                         t.plain(p.area(), u.area()), t.plain(p.centroid(), u.sectionLength()), t.plain(p.area() * p.centroid(), u.firstMoment()),
                         t.plain(p.ownInertia(), u.secondMoment()), t.plain(transfer, u.secondMoment())));

@@ -73,12 +73,4 @@ final class Texts {
     static String symbol(Unit unit) {
         return unit.symbol().replace("*", "·").replace("^2", "²").replace("^3", "³").replace("^4", "⁴");
     }
-
-    /**
-     * Round-off printed as the zero it stands for: a value within 1e-10 of the largest of its kind
-     * (the diagram's largest value, the terms summed to a residual, the section's I).
-     */
-    static double clean(double value, double scale) {
-        return Math.abs(value) <= 1e-10 * scale ? 0 : value;
-    }
 }
