@@ -57,11 +57,14 @@ final class BandedSolver implements CaseSolver.Assembly {
     }
 
     /**
-     * Factorises in place and solves; the matrix cannot be reused. {@code pivotRatio[0]} receives
-     * the smallest ratio of a pivot to its unknown's own diagonal stiffness, a scale-free
-     * estimate of how close the model is to singular (its reciprocal estimates the condition).
+     * A refined solution, kept as {@code high + low}, and the smallest ratio of a pivot to its
+     * unknown's own diagonal stiffness: a scale-free estimate of how close the model is to
+     * singular (its reciprocal estimates the condition).
      */
-    double[] solve(double[] f, double[] pivotRatio) throws NotPositiveDefinite {
+    record Solution(double[] high, double[] low, double pivotRatio) {}
+
+    /** Factorises in place and solves; the matrix cannot be reused. */
+    Solution solve(double[] f) throws NotPositiveDefinite {
         double maxDiagonal = 0;
         for (int i = 0; i < n; i++) {
             maxDiagonal = Math.max(maxDiagonal, band[i][0]);
@@ -107,9 +110,6 @@ final class BandedSolver implements CaseSolver.Assembly {
                 band[i][j] = sum / pivot;
             }
         }
-        if (pivotRatio != null && pivotRatio.length > 0) {
-            pivotRatio[0] = minPivot;
-        }
         double[] hi = substitute(f);
         double[] lo = new double[n];
         // Iterative refinement with residuals in double-double precision, the solution kept as
@@ -125,15 +125,7 @@ final class BandedSolver implements CaseSolver.Assembly {
                 hi[i] = sum;
             }
         }
-        low = lo;
-        return hi;
-    }
-
-    private double[] low;
-
-    /** The low-order part of the last solution (hi + lo is the refined solution). */
-    double[] lowPart() {
-        return low;
+        return new Solution(hi, lo, minPivot);
     }
 
     /** r = f - K (hi + lo), each row accumulated exactly (two-product and two-sum) and rounded once. */

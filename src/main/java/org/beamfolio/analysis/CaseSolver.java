@@ -50,9 +50,8 @@ public final class CaseSolver {
         BandedSolver k = new BandedSolver(m.unknowns, 4);
         double[] f = new double[m.unknowns];
         double[][] feq = assemble(m, loads, k, f);
-        double[] ratio = new double[1];
-        double[] d = k.solve(f, ratio);
-        return fields(m, loads, feq, d, k.lowPart(), name, ratio[0]);
+        BandedSolver.Solution d = k.solve(f);
+        return fields(m, loads, feq, d.high(), d.low(), name, d.pivotRatio());
     }
 
     /** Where the assembly puts the stiffness: the banded solver, or a dense matrix to be written out. */
@@ -246,7 +245,8 @@ public final class CaseSolver {
             int[] dofs = dofs(m, e);
             int b = e * stride;
             // V = v - (q0 s + q1 s^2 / 2)
-            shear[b] = -0.0 + v;
+            // + 0.0 turns the -0.0 of an unloaded element into 0.0, so a zero term is a plain zero
+            shear[b] = v;
             shear[b + 1] = -loads.q0()[e] + 0.0;
             shear[b + 2] = -(loads.q1()[e] / 2) + 0.0;
             // M = mo + integral of V
@@ -261,9 +261,9 @@ public final class CaseSolver {
                 slope[b + k + 1] = moment[b + k] * flexibility / (k + 1);
             }
             // deflection (downward positive) = -(v_left + integral of slope)
-            deflection[b] = d[dofs[0]] * -1;
+            deflection[b] = -d[dofs[0]];
             for (int k = 0; k < 5; k++) {
-                deflection[b + k + 1] = slope[b + k] / (k + 1) * -1;
+                deflection[b + k + 1] = -(slope[b + k] / (k + 1));
             }
             v = Polynomial.horner(shear, b, 2, length);
             mo = Polynomial.horner(moment, b, 3, length);
@@ -342,6 +342,7 @@ public final class CaseSolver {
      */
     public static double[] equivalentLoads(double l, double q0, double q1) {
         if (q0 == 0 && q1 == 0) {
+            // minus a zero integral, signed as the general case below gives it
             return new double[] {-0.0, -0.0, -0.0, -0.0};
         }
         double[][] shape = {

@@ -2,7 +2,6 @@ package org.beamfolio.analysis;
 
 import java.util.ArrayList;
 import java.util.List;
-import org.beamfolio.units.RoundOff;
 
 /**
  * A field along the beam (shear, moment, slope, deflection, a stress) as polynomial pieces, one
@@ -214,30 +213,17 @@ public final class Field {
      * The largest and smallest of {@code shape} scaled piece by piece ({@code factors}, or 1),
      * evaluated at the given candidate points of each piece: exact when the candidates are those
      * of {@code shape} (a stress is a scaled moment, and shares the moment's candidates). Values
-     * that are the round-off of a zero ({@link RoundOff}) are reported as zero.
+     * that are the round-off of a zero are reported as zero ({@link Range}).
      */
     public Extreme[] extremes(double[] factors, Field shape, java.util.function.IntFunction<double[]> candidates) {
-        double bestMax = Double.NEGATIVE_INFINITY;
-        double bestMin = Double.POSITIVE_INFINITY;
-        double atMax = starts[0];
-        double atMin = starts[0];
-        double scale = 0;
+        Range range = new Range(starts[0]);
         for (int i = 0; i < starts.length; i++) {
             double k = factors == null ? 1 : factors[i];
             for (double sLocal : candidates.apply(i)) {
-                double v = k * shape.value(i, sLocal);
-                scale = Math.max(scale, Math.abs(v));
-                if (v > bestMax) {
-                    bestMax = v;
-                    atMax = starts[i] + sLocal;
-                }
-                if (v < bestMin) {
-                    bestMin = v;
-                    atMin = starts[i] + sLocal;
-                }
+                range.offer(k * shape.value(i, sLocal), starts[i] + sLocal);
             }
         }
-        return new Extreme[] {new Extreme(RoundOff.clean(bestMax, scale), atMax, null), new Extreme(RoundOff.clean(bestMin, scale), atMin, null)};
+        return new Extreme[] {range.max(), range.min()};
     }
 
     /**

@@ -1,7 +1,6 @@
 package org.beamfolio.analysis;
 
 import org.beamfolio.section.SectionProperties;
-import org.beamfolio.units.RoundOff;
 
 /**
  * Stresses from a response, element by element with each element's section: fibre stress
@@ -96,42 +95,5 @@ public final class Stresses {
         }
         return new Extremes(shearRange.max(), shearRange.min(), momentRange.max(), momentRange.min(), deflectionRange.max(),
                 deflectionRange.min(), topRange.max(), topRange.min(), bottomRange.max(), bottomRange.min(), tauMax);
-    }
-
-    /**
-     * The largest and smallest of the values offered and where, as {@link Field#extremes}: the
-     * first of equal values wins, and the round-off of a zero ({@link RoundOff}) reads as zero.
-     */
-    private static final class Range {
-        private double max = Double.NEGATIVE_INFINITY;
-        private double min = Double.POSITIVE_INFINITY;
-        private double atMax;
-        private double atMin;
-        private double scale;
-
-        Range(double start) {
-            atMax = start;
-            atMin = start;
-        }
-
-        void offer(double value, double x) {
-            scale = Math.max(scale, Math.abs(value));
-            if (value > max) {
-                max = value;
-                atMax = x;
-            }
-            if (value < min) {
-                min = value;
-                atMin = x;
-            }
-        }
-
-        Extreme max() {
-            return new Extreme(RoundOff.clean(max, scale), atMax, null);
-        }
-
-        Extreme min() {
-            return new Extreme(RoundOff.clean(min, scale), atMin, null);
-        }
     }
 }

@@ -56,6 +56,7 @@ final class BuildCommand implements Callable<Integer> {
             stderr.println("beamfolio: --previous compares one job with its previous revision; give exactly one job");
             return Main.BAD_INPUT;
         }
+        Pipeline.startReportSetUpEarly();
         ExitStatus status = new ExitStatus();
         boolean terminal = System.console() != null;
         List<String[]> table = new ArrayList<>();
@@ -63,7 +64,7 @@ final class BuildCommand implements Callable<Integer> {
         // layout and its fonts are not thread-safe. Output is reported in job order.
         int workers = Math.max(1, Math.min(files.size(), Runtime.getRuntime().availableProcessors()));
         ExecutorService pool = Executors.newFixedThreadPool(workers);
-        ThreadLocal<Pipeline> pipelines = ThreadLocal.withInitial(() -> new Pipeline(!noPdfa));
+        ThreadLocal<Pipeline> pipelines = ThreadLocal.withInitial(() -> Pipeline.building(!noPdfa));
         try {
             List<Future<Timed>> futures = new ArrayList<>();
             for (Path file : files) {

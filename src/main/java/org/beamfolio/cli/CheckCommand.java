@@ -27,7 +27,7 @@ final class CheckCommand implements Callable<Integer> {
             return Main.BAD_INPUT;
         }
         ExitStatus status = new ExitStatus();
-        Pipeline pipeline = new Pipeline();
+        Pipeline pipeline = Pipeline.checking();
         for (Path file : files) {
             Pipeline.Solved solved = pipeline.solve(file);
             solved.messages().forEach(stderr::print);

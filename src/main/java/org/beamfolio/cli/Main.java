@@ -32,9 +32,6 @@ public final class Main implements Runnable {
     CommandLine.Model.CommandSpec spec;
 
     public static void main(String[] args) {
-        if (args.length > 0 && args[0].equals("build")) {
-            Pipeline.startEarly();
-        }
         System.exit(run(args, System.out, System.err));
     }
 

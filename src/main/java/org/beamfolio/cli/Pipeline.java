@@ -26,19 +26,20 @@ import org.beamfolio.results.ResultsWriter;
  * complete, so bad input or a failure never leaves half a package or replaces a good one.
  */
 final class Pipeline {
-    private final PackageRenderer renderer = takeEarlyOrNew();
+    /** Null for a pipeline that only checks: it never sets up the report stack. */
+    private final PackageRenderer renderer;
     private final boolean archival;
 
-    /** A renderer whose setup began before the command line was parsed, for the first pipeline. */
+    /** A renderer whose setup began before the build's first pipeline was made, for that pipeline. */
     private static final java.util.concurrent.atomic.AtomicReference<PackageRenderer> EARLY =
             new java.util.concurrent.atomic.AtomicReference<>();
 
     /**
-     * Starts setting up one renderer now, on its own thread, for the first pipeline made: a
-     * one-job build then overlaps that setup with parsing the command line as well as with
+     * Starts setting up one renderer now, on its own thread, for the first building pipeline
+     * made: a one-job build then overlaps that setup with starting its workers as well as with
      * reading and solving the job.
      */
-    static void startEarly() {
+    static void startReportSetUpEarly() {
         EARLY.compareAndSet(null, new PackageRenderer());
     }
 
@@ -47,13 +48,23 @@ final class Pipeline {
         return early != null ? early : new PackageRenderer();
     }
 
-    Pipeline() {
-        this(true);
+    private Pipeline(PackageRenderer renderer, boolean archival) {
+        this.renderer = renderer;
+        this.archival = archival;
     }
 
-    /** @param archival PDF/A-3b packages (the default) or plain PDF */
-    Pipeline(boolean archival) {
-        this.archival = archival;
+    /** A pipeline that reads, solves and checks jobs and writes nothing; it never sets up the report stack. */
+    static Pipeline checking() {
+        return new Pipeline(null, true);
+    }
+
+    /**
+     * A pipeline that builds packages; its report stack is set up in the background from now on.
+     *
+     * @param archival PDF/A-3b packages (the default) or plain PDF
+     */
+    static Pipeline building(boolean archival) {
+        return new Pipeline(takeEarlyOrNew(), archival);
     }
 
     /** What building one job gave: its files, sheets, governing check ratio (NaN without checks) and whether all pass. */
@@ -103,6 +114,9 @@ final class Pipeline {
 
     /** With {@code previous}, the package compares this job with that earlier revision of it. */
     Outcome build(Path file, Path outDir, boolean csv, Path previous) {
+        if (renderer == null) {
+            throw new IllegalStateException("a checking pipeline writes no package");
+        }
         Solved solved = solve(file);
         if (solved.status() != Main.OK) {
             return new Outcome(solved.status(), solved.messages());
