@@ -3,6 +3,7 @@ package org.beamfolio.job;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
+import java.util.Set;
 import org.beamfolio.model.Beam;
 import org.beamfolio.model.Bracing;
 import org.beamfolio.model.Hinge;
@@ -17,6 +18,18 @@ import org.beamfolio.units.Suggest;
 
 /** Reads the beam: its length, section and material, supports, hinges and segments. */
 final class BeamReader {
+    /** The keys of the beam block: the reader rejects any other, and the JSON Schema is tested against them. */
+    static final Set<String> BEAM_KEYS = Set.of("length", "section", "material", "supports", "hinges", "segments", "bracing", "self_weight");
+
+    /** The keys of one support (k and kr for a spring only): the reader rejects any other, and the JSON Schema is tested against them. */
+    static final Set<String> SUPPORT_KEYS = Set.of("at", "type", "k", "kr", "bearing");
+
+    /** The keys of the beam's bracing: the reader rejects any other, and the JSON Schema is tested against them. */
+    static final Set<String> BRACING_KEYS = Set.of("top", "bottom");
+
+    /** The keys of one segment of the beam: the reader rejects any other, and the JSON Schema is tested against them. */
+    static final Set<String> SEGMENT_KEYS = Set.of("from", "to", "section", "material");
+
     /** Positions closer than this fraction of the beam length are the same point. */
     static final double SAME_POINT = 1e-9;
     static final int MAX_SUPPORTS = 2001;
@@ -53,7 +66,7 @@ final class BeamReader {
                 }
             }
         }
-        f.rejectUnknown();
+        f.rejectUnknown(BEAM_KEYS);
         if (length == null || section == null || material == null || supports == null || hinges == null || segments == null
                 || bracing == null) {
             return null;
@@ -154,7 +167,7 @@ final class BeamReader {
             }
             YamlNode bearingNode = s.optional("bearing");
             Double bearing = bearingNode == null ? null : c.positive(bearingNode, s.path("bearing"), Dimension.LENGTH);
-            s.rejectUnknown();
+            s.rejectUnknown(SUPPORT_KEYS);
             if (at == null || kind == null || (bearingNode != null && bearing == null)) {
                 ok = false;
                 continue;
@@ -187,7 +200,7 @@ final class BeamReader {
         }
         Bracing.Lateral top = lateral(c, b, "top", length);
         Bracing.Lateral bottom = lateral(c, b, "bottom", length);
-        b.rejectUnknown();
+        b.rejectUnknown(BRACING_KEYS);
         return top == null || bottom == null ? null : new Bracing(top, bottom);
     }
 
@@ -306,7 +319,7 @@ final class BeamReader {
                 c.error(items.get(i), path, "a segment must name a section or a material (or both)");
                 ok = false;
             }
-            s.rejectUnknown();
+            s.rejectUnknown(SEGMENT_KEYS);
             if (from == null || to == null || section == null || material == null) {
                 ok = false;
                 continue;

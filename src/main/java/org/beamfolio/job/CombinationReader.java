@@ -20,6 +20,15 @@ import org.beamfolio.units.Suggest;
 
 /** Reads what depends on the load cases: combinations, pattern loading and the checks. */
 final class CombinationReader {
+    /** The keys of the checks block: the reader rejects any other, and the JSON Schema is tested against them. */
+    static final Set<String> CHECKS_KEYS = Set.of("stress", "deflection");
+
+    /** The keys of one combination of an explicit list: the reader rejects any other, and the JSON Schema is tested against them. */
+    static final Set<String> COMBINATION_KEYS = Set.of("name", "factors");
+
+    /** The keys of one deflection limit under checks: the reader rejects any other, and the JSON Schema is tested against them. */
+    static final Set<String> DEFLECTION_KEYS = Set.of("cases", "limit", "max", "relative");
+
     static final int MAX_COMBINATIONS = 500;
     private static final Pattern SPAN_RATIO = Pattern.compile("\\s*L\\s*/\\s*(\\d+(?:\\.\\d+)?)\\s*");
 
@@ -71,7 +80,7 @@ final class CombinationReader {
                         }
                     }
                 }
-                f.rejectUnknown();
+                f.rejectUnknown(CHECKS_KEYS);
                 if (stress && BuiltInSets.ASCE7_LRFD.equals(setName)) {
                     // factored strength combinations are not compared with allowable stresses
                     c.error(f.optional("stress"), f.path("stress"), "allowable-stress checks need allowable-stress or service combinations,"
@@ -140,7 +149,7 @@ final class CombinationReader {
                     }
                 }
             }
-            f.rejectUnknown();
+            f.rejectUnknown(COMBINATION_KEYS);
             if (name != null && !factors.isEmpty()) {
                 out.add(new Combination(name, factors));
             }
@@ -224,7 +233,7 @@ final class CombinationReader {
         }
         YamlNode relativeNode = f.optional("relative");
         Boolean relative = relativeNode == null ? Boolean.TRUE : c.bool(relativeNode, f.path("relative"));
-        f.rejectUnknown();
+        f.rejectUnknown(DEFLECTION_KEYS);
         if (named.isEmpty() || (ratio == null && max == null) || relative == null) {
             return null;
         }

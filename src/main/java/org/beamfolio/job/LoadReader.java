@@ -2,6 +2,7 @@ package org.beamfolio.job;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Set;
 import org.beamfolio.loads.AreaLoad;
 import org.beamfolio.loads.ReductionSettings;
 import org.beamfolio.loads.TakeOff;
@@ -16,6 +17,9 @@ import org.beamfolio.units.Dimension;
  * over a tributary width, which the take-off turns into line loads (reduced where the job asks).
  */
 final class LoadReader {
+    /** The keys of one load, of any type (each type reads its own of them): the reader rejects any other, and the JSON Schema is tested against them. */
+    static final Set<String> LOAD_KEYS = Set.of("type", "case", "note", "P", "M", "w", "at", "from", "to", "sense", "load", "width", "bearing");
+
     static final int MAX_LOADS = 20000;
 
     private LoadReader() {}
@@ -89,14 +93,14 @@ final class LoadReader {
         YamlNode noteNode = f.optional("note");
         String note = noteNode == null ? "" : c.text(noteNode, f.path("note"));
         if (type == null) {
-            f.rejectUnknown("P", "M", "w", "at", "from", "to", "sense", "load", "width", "bearing");
+            f.rejectUnknown(LOAD_KEYS, "P", "M", "w", "at", "from", "to", "sense", "load", "width", "bearing");
             return null;
         }
         if (f.has("width") || f.has("load")) {
             // the engineer meant an area load: say how to write one, not what is wrong with w
             c.error(f.node(), f.path("type"), "a tributary width belongs to an area load: write type: area, load: <a name under"
                     + " area_loads, which holds the pressure>, width: ...; or give the line load w without a width");
-            f.rejectUnknown("P", "M", "w", "at", "from", "to", "sense", "bearing");
+            f.rejectUnknown(LOAD_KEYS, "P", "M", "w", "at", "from", "to", "sense", "bearing");
             return null;
         }
         Load load = switch (type) {
@@ -105,7 +109,7 @@ final class LoadReader {
             case "uniform" -> uniform(c, f, loadCase, note, length, node.location());
             default -> linear(c, f, loadCase, note, length, node.location());
         };
-        f.rejectUnknown();
+        f.rejectUnknown(LOAD_KEYS);
         return loadCase == null || note == null || load == null ? null : new Entry(load, null, node.location());
     }
 
@@ -124,7 +128,7 @@ final class LoadReader {
         String note = noteNode == null ? "" : c.text(noteNode, f.path("note"));
         Double[] widths = widths(c, f);
         Double[] range = range(c, f, length, false);
-        f.rejectUnknown("case", "w");
+        f.rejectUnknown(LOAD_KEYS, "case", "w");
         if (name == null || note == null || widths == null || range == null || f.has("case") || f.has("w")) {
             return null;
         }

@@ -2,12 +2,22 @@ package org.beamfolio.job;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Set;
 import org.beamfolio.model.Project;
 import org.beamfolio.model.ReportSettings;
 import org.beamfolio.units.UnitSystem;
 
 /** Reads the project block and the report settings. */
 final class ProjectReader {
+    /** The keys of one entry of project.history: the reader rejects any other, and the JSON Schema is tested against them. */
+    static final Set<String> HISTORY_KEYS = Set.of("rev", "date", "by", "note");
+
+    /** The keys of the project block: the reader rejects any other, and the JSON Schema is tested against them. */
+    static final Set<String> PROJECT_KEYS = Set.of("title", "number", "client", "location", "subject", "prepared_by", "checked_by", "date", "revision", "notes", "history");
+
+    /** The keys of the report block: the reader rejects any other, and the JSON Schema is tested against them. */
+    static final Set<String> REPORT_KEYS = Set.of("units", "paper", "positions");
+
     private ProjectReader() {}
 
     static Project read(ReadContext context, YamlNode node) {
@@ -36,14 +46,14 @@ final class ProjectReader {
                 if (h != null) {
                     history.add(new Project.Revision(text(context, h, "rev", true), text(context, h, "date", false),
                             text(context, h, "by", false), text(context, h, "note", false)));
-                    h.rejectUnknown();
+                    h.rejectUnknown(HISTORY_KEYS);
                 }
             }
         }
         if (date != null && !date.isEmpty() && !date.matches("\\d{4}-\\d{2}-\\d{2}")) {
             context.error(f.optional("date"), f.path("date"), "expected a date as YYYY-MM-DD, got \"" + date + "\"");
         }
-        f.rejectUnknown();
+        f.rejectUnknown(PROJECT_KEYS);
         if (title == null) {
             return null;
         }
@@ -96,7 +106,7 @@ final class ProjectReader {
                 }
             }
         }
-        f.rejectUnknown();
+        f.rejectUnknown(REPORT_KEYS);
         return new ReportSettings(units, paper, positions);
     }
 }

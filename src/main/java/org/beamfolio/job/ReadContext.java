@@ -236,6 +236,21 @@ final class ReadContext {
             return optional(key) != null;
         }
 
+        /**
+         * As {@link #rejectUnknown(String...)}, for a block whose reader declares the keys it
+         * accepts ({@code declared}, the set the JSON Schema is tested against): a key asked for
+         * or allowed here that the declaration lacks is a mistake in the reader, and fails at once.
+         */
+        void rejectUnknown(Set<String> declared, String... alsoAllowed) {
+            Set<String> read = new LinkedHashSet<>(known);
+            read.addAll(List.of(alsoAllowed));
+            read.removeAll(declared);
+            if (!read.isEmpty()) {
+                throw new IllegalStateException(path + ": the reader reads " + read + " but does not declare them among " + declared);
+            }
+            rejectUnknown(alsoAllowed);
+        }
+
         /** Reports every key not asked for, with the nearest known key as a suggestion. */
         void rejectUnknown(String... alsoAllowed) {
             known.addAll(List.of(alsoAllowed));

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Set;
 import java.util.Map;
 import org.beamfolio.model.Section;
 import org.beamfolio.model.SectionShape;
@@ -11,6 +12,12 @@ import org.beamfolio.units.Dimension;
 
 /** Reads the sections and rejects shapes that cannot be built (a flange deeper than the section). */
 final class SectionReader {
+    /** The keys of one section: a designation from the catalogue, or a shape and its dimensions: the reader rejects any other, and the JSON Schema is tested against them. */
+    static final Set<String> SECTION_KEYS = Set.of("designation", "lumber", "plies", "shape", "flip", "b", "h", "d", "t", "bf", "tf", "tw", "plates", "I", "depth", "y_bottom", "A", "Q");
+
+    /** The keys of one plate of a plates section: the reader rejects any other, and the JSON Schema is tested against them. */
+    static final Set<String> PLATE_KEYS = Set.of("b", "h", "y");
+
     static final List<String> SHAPES = List.of("rectangle", "circle", "tube", "pipe", "i_beam", "tee", "channel", "plates", "given");
 
     private SectionReader() {}
@@ -44,7 +51,7 @@ final class SectionReader {
         }
         if (f.has("lumber")) {
             Section lumber = lumber(context, f, id);
-            f.rejectUnknown();
+            f.rejectUnknown(SECTION_KEYS);
             return lumber;
         }
         boolean flip = false;
@@ -56,17 +63,17 @@ final class SectionReader {
         YamlNode designation = f.optional("designation");
         if (designation != null) {
             SectionShape catalogued = CatalogueSections.read(context, designation, f.path("designation"));
-            f.rejectUnknown();
+            f.rejectUnknown(SECTION_KEYS);
             return catalogued == null ? null : new Section(id, catalogued, flip);
         }
         YamlNode shapeNode = f.required("shape");
         if (shapeNode == null) {
-            f.rejectUnknown("b", "h", "d", "t", "bf", "tf", "tw", "plates", "I", "depth", "y_bottom", "A", "Q");
+            f.rejectUnknown(SECTION_KEYS, "b", "h", "d", "t", "bf", "tf", "tw", "plates", "I", "depth", "y_bottom", "A", "Q");
             return null;
         }
         String shape = context.choice(shapeNode, f.path("shape"), SHAPES);
         if (shape == null) {
-            f.rejectUnknown("b", "h", "d", "t", "bf", "tf", "tw", "plates", "I", "depth", "y_bottom", "A", "Q");
+            f.rejectUnknown(SECTION_KEYS, "b", "h", "d", "t", "bf", "tf", "tw", "plates", "I", "depth", "y_bottom", "A", "Q");
             return null;
         }
         SectionShape result = switch (shape) {
@@ -78,7 +85,7 @@ final class SectionReader {
             case "plates" -> plates(context, f);
             default -> given(context, f);
         };
-        f.rejectUnknown();
+        f.rejectUnknown(SECTION_KEYS);
         return result == null ? null : new Section(id, result, flip);
     }
 
@@ -221,7 +228,7 @@ final class SectionReader {
                 c.error(yNode, p.path("y"), "a plate cannot sit below the section's bottom: y must be zero or more");
                 y = null;
             }
-            p.rejectUnknown();
+            p.rejectUnknown(PLATE_KEYS);
             if (b == null || h == null || y == null) {
                 ok = false;
             } else {
