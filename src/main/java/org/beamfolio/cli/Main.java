@@ -19,7 +19,7 @@ import picocli.CommandLine.Command;
         exitCodeList = {"0:every package written (or job checked); every check meets its limit",
                 "3:every package written (or job checked); some check does not meet its limit",
                 "2:invalid input; nothing written for that job", "1:internal failure; nothing half-written"},
-        subcommands = {BuildCommand.class, CheckCommand.class, NewCommand.class, SealCommand.class, VerifyCommand.class,
+        subcommands = {BuildCommand.class, CheckCommand.class, WatchCommand.class, NewCommand.class, SealCommand.class, VerifyCommand.class,
                 CommandLine.HelpCommand.class})
 public final class Main implements Runnable {
     public static final int OK = 0;

@@ -114,10 +114,14 @@ final class Pipeline {
 
     /** With {@code previous}, the package compares this job with that earlier revision of it. */
     Outcome build(Path file, Path outDir, boolean csv, Path previous) {
+        return write(file, solve(file), outDir, csv, previous);
+    }
+
+    /** Writes the package of a job solved already (or returns why it cannot be written). */
+    Outcome write(Path file, Solved solved, Path outDir, boolean csv, Path previous) {
         if (renderer == null) {
             throw new IllegalStateException("a checking pipeline writes no package");
         }
-        Solved solved = solve(file);
         if (solved.status() != Main.OK) {
             return new Outcome(solved.status(), solved.messages());
         }
