@@ -89,7 +89,7 @@ if %JOBS% GTR 1 set "LONG=1"
 if defined LONG (
   set "OPTIONS=-Xmx256m"
 ) else (
-  set "OPTIONS=-XX:TieredStopAtLevel=1 -XX:CICompilerCount=1 -Xmx256m -XX:+UseSerialGC"
+  set "OPTIONS=-XX:TieredStopAtLevel=1 -XX:CICompilerCount=1 -Xmx256m"
 )
 set "OPTIONS=%OPTIONS% -XX:-UsePerfData -Xshare:auto -Xlog:disable -Xlog:all=error:stderr"
 
