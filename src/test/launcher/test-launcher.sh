@@ -19,7 +19,7 @@ bin="$work/launcher home/bin"
 mkdir -p "$bin"
 cp target/beamfolio target/beamfolio.jar "$bin/"
 launcher="$bin/beamfolio"
-cache="$work/cache"
+cache="$work/cache folder"
 job=$root/example-jobs/warehouse-mezzanine-simple-span.yaml
 java=$(command -v java)
 
