@@ -40,8 +40,9 @@ if exist "%RUNTIME%\release" (
     if "%%A"=="JAVA_RUNTIME_VERSION" set "BUILD=%%~B"
   )
 )
+rem the first line of java -version reads: openjdk version "17.0.15" ...
 if not defined VERSION (
-  for /f "tokens=3" %%V in ('""%JAVA%" -version 2>&1 | findstr /i /c:"version""') do set "VERSION=%%~V"
+  for /f "tokens=3" %%V in ('call "%JAVA%" -version 2^>^&1') do if not defined VERSION set "VERSION=%%~V"
 )
 set "BUILD=%BUILD%%VERSION%"
 set "MAJOR="
