@@ -145,8 +145,8 @@ class FlexureTest {
     @Test
     void teeLrIsWhereTheElasticMomentReachesMy() {
         // AISC 360-16 F9.2(a): Lr (Eq. F9-9) is the length at which Mcr of Eq. F9-10 equals My
-        // (the elastic and inelastic ranges meet), a check of the equations' transcription: the
-        // printed constants 1.95 and 2.36 are rounded, so they meet to 1e-3, not to round-off.
+        // (the elastic and inelastic ranges meet), so the two equations as coded must agree there;
+        // the specification's constants 1.95 and 2.36 are rounded, so they meet to 1e-3, not to round-off.
         SteelMember wt = member("WT9X17.5", SteelGrade.A992);
         LimitStateResult atLr = new F9LateralTorsionalBuckling().evaluate(wt, new FlexureCase(1, 1, false));
         double lr = equation(atLr, "Lr");
