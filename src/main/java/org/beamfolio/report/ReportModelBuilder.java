@@ -211,7 +211,7 @@ final class ReportModelBuilder {
         List<List<String>> rows = new ArrayList<>();
         List<Boolean> failing = new ArrayList<>();
         for (CheckOutcome c : checks) {
-            rows.add(List.of(c.id(), c.description(), c.clause(), Numbers.format(c.demand(), c.unit()), Numbers.format(c.limit(), c.unit()),
+            rows.add(List.of(c.id(), c.description(), c.clause(), Numbers.format(c.demand()) + " " + Texts.symbol(c.unit()), Numbers.format(c.limit()) + " " + Texts.symbol(c.unit()),
                     Numbers.format(c.ratio()), c.pass() ? "meets" : "EXCEEDS", c.combination(), t.len(c.at())));
             failing.add(!c.pass());
         }
@@ -228,7 +228,7 @@ final class ReportModelBuilder {
     private List<String> failing(List<CheckOutcome> checks) {
         return checks.stream().filter(c -> !c.pass())
                 .map(c -> c.id() + ", " + c.description() + ": ratio " + Numbers.format(c.ratio()) + " (demand "
-                        + Numbers.format(c.demand(), c.unit()) + " against a limit of " + Numbers.format(c.limit(), c.unit())
+                        + Numbers.format(c.demand()) + " " + Texts.symbol(c.unit()) + " against a limit of " + Numbers.format(c.limit()) + " " + Texts.symbol(c.unit())
                         + ") under " + c.combination() + " at " + t.len(c.at()))
                 .toList();
     }

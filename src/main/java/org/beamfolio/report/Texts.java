@@ -71,6 +71,11 @@ final class Texts {
     }
 
     static String symbol(Unit unit) {
-        return unit.symbol().replace("*", "·").replace("^2", "²").replace("^3", "³").replace("^4", "⁴");
+        return symbol(unit.symbol());
+    }
+
+    /** A unit symbol as the report prints it (lb·ft, in⁴). */
+    static String symbol(String symbol) {
+        return symbol.replace("*", "·").replace("^2", "²").replace("^3", "³").replace("^4", "⁴");
     }
 }
