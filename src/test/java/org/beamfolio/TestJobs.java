@@ -48,6 +48,29 @@ public final class TestJobs {
         return reading.job();
     }
 
+    /**
+     * Every beam of an example job file, solved: the one beam of a single-beam job, or each member
+     * of a job with members along its load path, with the reactions it carries brought in.
+     */
+    public static java.util.List<AnalysisResult> solveEvery(java.nio.file.Path file) {
+        JobReading reading = JobReader.read(file);
+        assertTrue(reading.ok(), reading::report);
+        try {
+            if (!reading.hasMembers()) {
+                return java.util.List.of(Analysis.run(reading.job()));
+            }
+            java.util.Map<String, AnalysisResult> solved = new java.util.LinkedHashMap<>();
+            for (java.util.List<Job> level : org.beamfolio.analysis.LoadPath.levels(reading.project())) {
+                for (Job member : level) {
+                    solved.put(member.member(), Analysis.run(org.beamfolio.analysis.MemberLoads.withReactions(member, solved)));
+                }
+            }
+            return java.util.List.copyOf(solved.values());
+        } catch (UnstableBeamException e) {
+            throw new AssertionError("example beam should be stable: " + e.getMessage(), e);
+        }
+    }
+
     public static AnalysisResult solve(String text) {
         try {
             return Analysis.run(job(text));

@@ -37,6 +37,10 @@ final class BuildCommand implements Callable<Integer> {
     @Option(names = "--no-pdfa", description = "write a plain PDF rather than PDF/A-3b")
     boolean noPdfa;
 
+    @Option(names = "--combine", paramLabel = "NAME",
+            description = "gather every job given into one package, DIR/NAME.pdf, each job a member under its own name")
+    String combine;
+
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
 
@@ -55,6 +59,9 @@ final class BuildCommand implements Callable<Integer> {
         if (previous != null && files.size() != 1) {
             stderr.println("beamfolio: --previous compares one job with its previous revision; give exactly one job");
             return Main.BAD_INPUT;
+        }
+        if (combine != null) {
+            return combine(files, stdout, stderr);
         }
         Pipeline.startReportSetUpEarly();
         ExitStatus status = new ExitStatus();
@@ -109,6 +116,26 @@ final class BuildCommand implements Callable<Integer> {
         stdout.flush();
         stderr.flush();
         return status.get();
+    }
+
+    private Integer combine(List<Path> files, PrintWriter stdout, PrintWriter stderr) {
+        if (previous != null) {
+            stderr.println("beamfolio: --previous compares one job with its previous revision; it does not combine with --combine");
+            return Main.BAD_INPUT;
+        }
+        if (!combine.matches("[\\w][\\w.-]*")) {
+            stderr.println("beamfolio: --combine " + combine + ": a package name is letters, digits, '.', '-' and '_', without a folder");
+            return Main.BAD_INPUT;
+        }
+        Pipeline.Outcome outcome = Pipeline.building(!noPdfa).combine(files, combine, out, csv);
+        outcome.messages().forEach(stderr::print);
+        if (outcome.pdf() != null) {
+            stdout.println("wrote " + outcome.pdf() + " and " + outcome.results() + " (" + files.size() + " jobs, "
+                    + outcome.pages() + " sheets)");
+        }
+        stdout.flush();
+        stderr.flush();
+        return outcome.status();
     }
 
     private record Timed(Pipeline.Outcome outcome, long millis) {}

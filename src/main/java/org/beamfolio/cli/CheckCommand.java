@@ -32,7 +32,7 @@ final class CheckCommand implements Callable<Integer> {
             Pipeline.Solved solved = pipeline.solve(file);
             solved.messages().forEach(stderr::print);
             if (solved.status() == Main.OK) {
-                stdout.print(Summary.of(solved.result(), solved.checks()));
+                stdout.print(solved.summary());
             }
             status.add(solved.statusWithChecks());
         }

@@ -80,7 +80,7 @@ final class JobWatch {
         Pipeline.Outcome outcome = pipeline.write(job, solved, out, false, null);
         long millis = (System.nanoTime() - start) / 1_000_000;
         if (solved.status() == Main.OK) {
-            stdout.print(Summary.of(solved.result(), solved.checks()));
+            stdout.print(solved.summary());
         }
         outcome.messages().forEach(stderr::print);
         if (outcome.pdf() != null) {

@@ -86,11 +86,41 @@ final class Pipeline {
         return count;
     }
 
-    /** The job read and solved, or the messages that say why it cannot be. */
-    record Solved(AnalysisResult result, List<CheckOutcome> checks, List<String> messages, int status) {
+    /**
+     * The job read and solved, or the messages that say why it cannot be. A single-beam job has
+     * its result and checks; a job with members has each member's, in the order written, and
+     * {@code checks} holds them all.
+     */
+    record Solved(AnalysisResult result, List<CheckOutcome> checks, List<String> messages, int status,
+                  List<PackageRenderer.Member> members) {
+        Solved(AnalysisResult result, List<CheckOutcome> checks, List<String> messages, int status) {
+            this(result, checks, messages, status, List.of());
+        }
+
         /** {@link Main#CHECKS_FAIL} for a solved job with a check that does not meet its limit, else the status. */
         int statusWithChecks() {
             return status == Main.OK && !checks.stream().allMatch(CheckOutcome::pass) ? Main.CHECKS_FAIL : status;
+        }
+
+        boolean hasMembers() {
+            return !members.isEmpty();
+        }
+
+        /** The job's name (its file name without .yaml). */
+        String name() {
+            return (hasMembers() ? members.get(0).result() : result).job().name();
+        }
+
+        /** The one-screen summary: the job's, or each member's under its id. */
+        String summary() {
+            if (!hasMembers()) {
+                return Summary.of(result, checks);
+            }
+            StringBuilder out = new StringBuilder();
+            for (PackageRenderer.Member m : members) {
+                out.append("member ").append(m.id()).append('\n').append(Summary.of(m.result(), m.checks()));
+            }
+            return out.toString();
         }
     }
 
@@ -99,17 +129,22 @@ final class Pipeline {
         if (!reading.ok()) {
             return new Solved(null, List.of(), List.of(reading.report()), Main.BAD_INPUT);
         }
+        if (reading.hasMembers()) {
+            return MemberSolver.solve(reading);
+        }
         try {
             AnalysisResult result = Analysis.run(reading.job());
             return new Solved(result, Checks.run(result), List.of(), Main.OK);
         } catch (UnstableBeamException e) {
             Instability i = e.instability();
-            Diagnostic d = new Diagnostic(reading.file(), i.where(), i.keyPath(), i.message());
-            return new Solved(null, List.of(), List.of(d.render(reading.source()) + "\n"), Main.BAD_INPUT);
+            return badInput(reading, new Diagnostic(reading.file(), i.where(), i.keyPath(), i.message()));
         } catch (org.beamfolio.checks.timber.TimberInputException e) {
-            Diagnostic d = new Diagnostic(reading.file(), e.where(), e.keyPath(), e.getMessage());
-            return new Solved(null, List.of(), List.of(d.render(reading.source()) + "\n"), Main.BAD_INPUT);
+            return badInput(reading, new Diagnostic(reading.file(), e.where(), e.keyPath(), e.getMessage()));
         }
+    }
+
+    static Solved badInput(JobReading reading, Diagnostic d) {
+        return new Solved(null, List.of(), List.of(d.render(reading.source()) + "\n"), Main.BAD_INPUT);
     }
 
     /** With {@code previous}, the package compares this job with that earlier revision of it. */
@@ -125,9 +160,20 @@ final class Pipeline {
         if (solved.status() != Main.OK) {
             return new Outcome(solved.status(), solved.messages());
         }
+        if (solved.hasMembers()) {
+            if (previous != null) {
+                return new Outcome(Main.BAD_INPUT, List.of(file + ": --previous compares single-beam jobs; a job with members"
+                        + " keeps its revisions in project.history\n"));
+            }
+            return writeMembers(file, solved, solved.name(), solved.members().get(0).result().job().sha256(), outDir, csv);
+        }
         Solved before = null;
         if (previous != null) {
             before = solve(previous);
+            if (before.status() == Main.OK && before.hasMembers()) {
+                return new Outcome(Main.BAD_INPUT, List.of(previous + ": the previous revision (--previous) is a job with members;"
+                        + " it compares only with a single-beam job; nothing was written\n"));
+            }
             if (before.status() != Main.OK) {
                 List<String> messages = new ArrayList<>(before.messages());
                 messages.add(previous + ": the previous revision (--previous) must itself be a valid job; nothing was written\n");
@@ -157,11 +203,78 @@ final class Pipeline {
                     + "  nothing was written; an earlier package of the same name is unchanged\n");
             return new Outcome(Main.INTERNAL_FAILURE, messages);
         }
-        double ratio = solved.checks().stream().mapToDouble(CheckOutcome::ratio).max().orElse(Double.NaN);
-        boolean pass = solved.checks().stream().allMatch(CheckOutcome::pass);
+        return finished(file, solved.checks(), pdf, results, document);
+    }
+
+    /**
+     * Gathers single-beam jobs into one package named {@code name}, each job a member under its
+     * own name; nothing is written unless every job reads and solves.
+     */
+    Outcome combine(List<Path> files, String name, Path outDir, boolean csv) {
+        List<String> messages = new ArrayList<>();
+        List<PackageRenderer.Member> members = new ArrayList<>();
+        List<CheckOutcome> checks = new ArrayList<>();
+        java.util.Set<String> names = new java.util.HashSet<>();
+        for (Path file : files) {
+            Solved solved = solve(file);
+            if (solved.status() != Main.OK) {
+                messages.addAll(solved.messages());
+            } else if (solved.hasMembers()) {
+                messages.add(file + ": a job with members is a package of its own; --combine gathers single-beam jobs\n");
+            } else if (!names.add(solved.name())) {
+                messages.add(file + ": another job given is also named " + solved.name() + "; the members of one package need"
+                        + " different names\n");
+            } else {
+                members.add(new PackageRenderer.Member(solved.name(), solved.result(), solved.checks()));
+                checks.addAll(solved.checks());
+            }
+        }
+        if (!messages.isEmpty()) {
+            messages.add(name + ": nothing was written (--combine writes the package only when every job reads and solves)\n");
+            return new Outcome(Main.BAD_INPUT, messages);
+        }
+        return writeMembers(Path.of(name), new Solved(null, checks, List.of(), Main.OK, members), name, null, outDir, csv);
+    }
+
+    /**
+     * Writes the one package and results file of a job with members, or of jobs gathered into one.
+     *
+     * @param sha256 the job file's digest, or null for jobs gathered from several files
+     */
+    private Outcome writeMembers(Path file, Solved solved, String name, String sha256, Path outDir, boolean csv) {
+        Path pdf = outDir.resolve(name + ".pdf");
+        Path results = outDir.resolve(name + ".results.json");
+        byte[] document;
+        try {
+            List<ResultsWriter.Member> forResults = solved.members().stream()
+                    .map(m -> new ResultsWriter.Member(m.id(), m.result(), m.checks())).toList();
+            byte[] json = ResultsWriter.writeMembers(sha256, forResults).getBytes(StandardCharsets.UTF_8);
+            document = renderer.renderMembers(solved.members(), archival);
+            Files.createDirectories(outDir);
+            List<Path> targets = new ArrayList<>(List.of(results, pdf));
+            List<byte[]> contents = new ArrayList<>(List.of(json, document));
+            if (csv) {
+                for (PackageRenderer.Member m : solved.members()) {
+                    targets.add(outDir.resolve(name + "." + m.id() + ".csv"));
+                    contents.add(org.beamfolio.results.CsvExport.write(m.result()).getBytes(StandardCharsets.UTF_8));
+                }
+            }
+            AtomicFiles.writeTogether(targets, contents);
+        } catch (IOException | RuntimeException e) {
+            return new Outcome(Main.INTERNAL_FAILURE, List.of(file + ": internal failure while writing the package: " + e + "\n"
+                    + "  nothing was written; an earlier package of the same name is unchanged\n"));
+        }
+        return finished(file, solved.checks(), pdf, results, document);
+    }
+
+    /** The outcome of a package written: its status, and what the terminal is told of failing checks. */
+    private static Outcome finished(Path file, List<CheckOutcome> checks, Path pdf, Path results, byte[] document) {
+        List<String> messages = new ArrayList<>();
+        double ratio = checks.stream().mapToDouble(CheckOutcome::ratio).max().orElse(Double.NaN);
+        boolean pass = checks.stream().allMatch(CheckOutcome::pass);
         if (!pass) {
             messages.add(file + ": the package was written, but it DOES NOT MEET "
-                    + String.join(", ", solved.checks().stream().filter(c -> !c.pass())
+                    + String.join(", ", checks.stream().filter(c -> !c.pass())
                             .map(c -> c.id() + " (ratio " + org.beamfolio.units.Numbers.format(c.ratio()) + ")").toList())
                     + "; it is marked as failing\n");
         }

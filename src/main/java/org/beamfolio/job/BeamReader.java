@@ -36,11 +36,12 @@ final class BeamReader {
 
     private BeamReader() {}
 
-    static Beam read(ReadContext c, YamlNode node, Defined<Material> materials, Defined<Section> sections) {
+    /** @param path the beam's key path ("beam", or "members[1].beam" for a member) */
+    static Beam read(ReadContext c, YamlNode node, String path, Defined<Material> materials, Defined<Section> sections) {
         if (node == null) {
             return null;
         }
-        ReadContext.Fields f = c.fields(node, "beam");
+        ReadContext.Fields f = c.fields(node, path);
         if (f == null) {
             return null;
         }

@@ -21,6 +21,7 @@ import org.beamfolio.model.Load;
 import org.beamfolio.model.Location;
 import org.beamfolio.model.Material;
 import org.beamfolio.model.Project;
+import org.beamfolio.model.ProjectJob;
 import org.beamfolio.model.ReportSettings;
 import org.beamfolio.model.Section;
 import org.beamfolio.model.TimberDesign;
@@ -84,8 +85,10 @@ public final class JobReader {
         } catch (YamlTreeReader.SyntaxError e) {
             return new JobReading(label, text, null, List.of(new Diagnostic(label, e.location, "", e.getMessage())));
         }
-        Job job = new JobReader.Walk(context, name, text, bytes).job(root);
-        return new JobReading(label, text, context.diagnostics().isEmpty() ? job : null, context.diagnostics());
+        Object read = new JobReader.Walk(context, name, text, bytes).read(root);
+        boolean clean = context.diagnostics().isEmpty();
+        return new JobReading(label, text, clean && read instanceof Job job ? job : null,
+                clean && read instanceof ProjectJob project ? project : null, context.diagnostics());
     }
 
     private static JobReading failed(String label, String source, String message) {
@@ -137,11 +140,31 @@ public final class JobReader {
             this.bytes = bytes;
         }
 
-        Job job(YamlNode root) {
+        /** The job the file holds: a single-beam {@link Job}, or a {@link ProjectJob} when it has members. */
+        Object read(YamlNode root) {
             ReadContext.Fields top = context.fields(root, "");
             if (top == null) {
                 return null;
             }
+            if (top.has("members")) {
+                return new MembersReader(context, this::member).read(top, name, text, bytes, sha256(bytes));
+            }
+            return job(root, top, null, null, null);
+        }
+
+        /** One member of a job with members, read as a single-beam job from its own keys over the shared ones. */
+        private Job member(ReadContext.Fields fields, String id, Defined<LoadReader.Supporting> supporting,
+                           Map<String, java.util.Set<String>> memberCases) {
+            return job(fields.node(), fields, id, supporting, memberCases);
+        }
+
+        /**
+         * @param member the member's id, or null for a single-beam job
+         * @param supporting the members whose reactions this one may carry, or null for a single-beam job
+         * @param memberCases their load cases
+         */
+        private Job job(YamlNode root, ReadContext.Fields top, String member, Defined<LoadReader.Supporting> supporting,
+                        Map<String, java.util.Set<String>> memberCases) {
             YamlNode version = top.required("beamfolio");
             if (version != null && !(version instanceof YamlNode.Scalar s && s.text().equals("1"))) {
                 context.error(version, "beamfolio", "unsupported format version: this tool reads format 1 (write \"beamfolio: 1\")");
@@ -154,21 +177,25 @@ public final class JobReader {
             YamlNode sectionsNode = top.required("sections");
             Map<String, Section> sections = SectionReader.readAll(context, sectionsNode);
             YamlNode beamNode = top.required("beam");
-            Beam beam = BeamReader.read(context, beamNode, Defined.keysOf(materialsNode, materials), Defined.keysOf(sectionsNode, sections));
+            Beam beam = BeamReader.read(context, beamNode, top.path("beam"), Defined.keysOf(materialsNode, materials),
+                    Defined.keysOf(sectionsNode, sections));
             Defined<org.beamfolio.loads.AreaLoad> areaLoads = AreaLoadReader.readAll(context, top.optional("area_loads"));
             YamlNode designNode = top.optional("design");
-            ReadContext.Fields design = designNode == null ? null : context.fields(designNode, "design");
+            ReadContext.Fields design = designNode == null ? null : context.fields(designNode, top.path("design"));
             org.beamfolio.loads.ReductionSettings reductions = designNode != null && design == null ? null
                     : DesignReader.reductions(context, design);
-            LoadReader.Read read = LoadReader.readAll(context, top.optional("loads"), beam, areaLoads, reductions);
+            LoadReader.Read read = LoadReader.readAll(context, top.optional("loads"), top.path("loads"), beam, areaLoads,
+                    reductions, supporting);
             List<Load> loads = read.loads();
             Map<String, String> cases = cases(top.optional("cases"));
-            if (loads.isEmpty() && (beam == null || beam.selfWeightCase() == null) && context.diagnostics().isEmpty()) {
+            if (loads.isEmpty() && read.reactions().isEmpty() && (beam == null || beam.selfWeightCase() == null)
+                    && context.diagnostics().isEmpty()) {
                 YamlNode at = top.optional("loads");
-                context.error(at != null ? at.location() : root.location(), "loads",
-                        "the job has no loads: add at least one load (or beam.self_weight) for there to be anything to check");
+                context.error(at != null ? at.location() : root.location(), top.path("loads"),
+                        "the " + (member == null ? "job" : "member") + " has no loads: add at least one load (or beam.self_weight)"
+                                + " for there to be anything to check");
             }
-            Defined<String> loadCases = LoadCases.of(loads, beam, beamNode, top.optional("loads"), areaLoads);
+            Defined<String> loadCases = LoadCases.of(loads, beam, beamNode, top.optional("loads"), areaLoads, memberCases);
             CombinationReader.Outcome combos = CombinationReader.read(context, top, loadCases, beam);
             TimberDesign timber = TimberDesignReader.read(context, design, loadCases, materials, sections, beam,
                     beamNode, combos == null ? null : combos.setName());
@@ -187,7 +214,7 @@ public final class JobReader {
             }
             return new Job(name, text, sha256(bytes), project, report, materials, sections, beam, loads, cases,
                     combos.setName(), combos.combinations(), combos.pattern(), combos.stressCheck(), combos.deflection(), bytes,
-                    read.takeOff(), steel, timber);
+                    read.takeOff(), steel, timber, member, read.reactions());
         }
 
         /** A stress check compares with the allowables, so every material on the beam must give them. */

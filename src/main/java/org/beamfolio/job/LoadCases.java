@@ -17,8 +17,9 @@ import org.beamfolio.model.Load;
 final class LoadCases {
     private LoadCases() {}
 
+    /** @param memberCases the cases of each member read so far, for reaction loads; null for a single-beam job */
     static Defined<String> of(List<Load> loads, Beam beam, YamlNode beamNode, YamlNode loadsNode,
-                              Defined<org.beamfolio.loads.AreaLoad> areaLoads) {
+                              Defined<org.beamfolio.loads.AreaLoad> areaLoads, Map<String, Set<String>> memberCases) {
         Map<String, String> used = new LinkedHashMap<>();
         loads.forEach(l -> used.put(l.loadCase(), l.loadCase()));
         if (beam != null && beam.selfWeightCase() != null) {
@@ -29,7 +30,8 @@ final class LoadCases {
         boolean complete = beamNode instanceof YamlNode.Mapping m && caseOf(m, "self_weight", named, true);
         if (loadsNode instanceof YamlNode.Sequence s) {
             for (YamlNode item : s.items()) {
-                complete &= item instanceof YamlNode.Mapping m && (isArea(m) ? areaCases(m, areaLoads, named) : caseOf(m, "case", named, false));
+                complete &= item instanceof YamlNode.Mapping m && (is(m, "area") ? areaCases(m, areaLoads, named)
+                        : is(m, "reaction") ? memberCases(m, memberCases, used, named) : caseOf(m, "case", named, false));
             }
         } else if (loadsNode != null) {
             complete = false;
@@ -37,9 +39,22 @@ final class LoadCases {
         return new Defined<>(used, named, complete);
     }
 
-    private static boolean isArea(YamlNode.Mapping m) {
+    private static boolean is(YamlNode.Mapping m, String loadType) {
         YamlNode.Entry type = m.entries().get("type");
-        return type != null && type.value() instanceof YamlNode.Scalar s && s.text().strip().equalsIgnoreCase("area");
+        return type != null && type.value() instanceof YamlNode.Scalar s && s.text().strip().equalsIgnoreCase(loadType);
+    }
+
+    /** Adds the cases of the member whose reaction a load brings; false when that member did not read. */
+    private static boolean memberCases(YamlNode.Mapping m, Map<String, Set<String>> memberCases, Map<String, String> used,
+                                       Set<String> named) {
+        YamlNode.Entry member = m.entries().get("member");
+        if (memberCases != null && member != null && member.value() instanceof YamlNode.Scalar s
+                && memberCases.containsKey(s.text().strip())) {
+            memberCases.get(s.text().strip()).forEach(c -> used.put(c, c));
+            named.addAll(memberCases.get(s.text().strip()));
+            return true;
+        }
+        return false;
     }
 
     /** Adds the cases of the area load an application names; false when that area load did not read. */

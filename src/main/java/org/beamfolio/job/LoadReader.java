@@ -10,6 +10,7 @@ import org.beamfolio.loads.Tributary;
 import org.beamfolio.model.Beam;
 import org.beamfolio.model.Load;
 import org.beamfolio.model.Location;
+import org.beamfolio.model.ReactionLoad;
 import org.beamfolio.units.Dimension;
 
 /**
@@ -18,32 +19,50 @@ import org.beamfolio.units.Dimension;
  */
 final class LoadReader {
     /** The keys of one load, of any type (each type reads its own of them): the reader rejects any other, and the JSON Schema is tested against them. */
-    static final Set<String> LOAD_KEYS = Set.of("type", "case", "note", "P", "M", "w", "at", "from", "to", "sense", "load", "width", "bearing");
+    static final Set<String> LOAD_KEYS = Set.of("type", "case", "note", "P", "M", "w", "at", "from", "to", "sense", "load", "width", "bearing",
+            "member", "support", "spacing");
 
     static final int MAX_LOADS = 20000;
 
     private LoadReader() {}
 
-    /** The member's loads in the order written (an area load's line loads where it stood), and their take-off. */
-    record Read(List<Load> loads, TakeOff takeOff) {}
+    /**
+     * The member's loads in the order written (an area load's line loads where it stood), their
+     * take-off, and the reactions of other members it carries (brought in once those are solved).
+     */
+    record Read(List<Load> loads, TakeOff takeOff, List<ReactionLoad> reactions) {}
 
-    /** One entry of the list: a load, or an area load on a width still to be taken off. */
-    private record Entry(Load load, Tributary tributary, Location where) {}
+    /** A member whose reactions another member of the job may carry: how many supports it has. */
+    record Supporting(String id, int supports) {}
 
-    static Read readAll(ReadContext c, YamlNode node, Beam beam, Defined<AreaLoad> areaLoads, ReductionSettings reductions) {
+    /** One entry of the list: a load, an area load on a width still to be taken off, or a reaction to bring in. */
+    private record Entry(Load load, Tributary tributary, ReactionLoad reaction, Location where) {
+        Entry(Load load, Tributary tributary, Location where) {
+            this(load, tributary, null, where);
+        }
+    }
+
+    /**
+     * @param path the loads' key path ("loads", or "members[1].loads" for a member)
+     * @param members the members whose reactions this one may carry, read so far; null for a
+     *        single-beam job, which carries none
+     */
+    static Read readAll(ReadContext c, YamlNode node, String path, Beam beam, Defined<AreaLoad> areaLoads,
+                        ReductionSettings reductions, Defined<Supporting> members) {
         List<Load> result = new ArrayList<>();
-        List<YamlNode> items = JobReader.listOrEmpty(c, node, "loads");
+        List<ReactionLoad> reactions = new ArrayList<>();
+        List<YamlNode> items = JobReader.listOrEmpty(c, node, path);
         if (items == null) {
-            return new Read(result, TakeOff.EMPTY);
+            return new Read(result, TakeOff.EMPTY, reactions);
         }
         if (items.size() > MAX_LOADS) {
-            c.error(node, "loads", "too many loads: " + items.size() + " (at most " + MAX_LOADS + ")");
-            return new Read(result, TakeOff.EMPTY);
+            c.error(node, path, "too many loads: " + items.size() + " (at most " + MAX_LOADS + ")");
+            return new Read(result, TakeOff.EMPTY, reactions);
         }
         Double length = beam == null ? null : beam.length();
         List<Entry> entries = new ArrayList<>();
         for (int i = 0; i < items.size(); i++) {
-            Entry entry = read(c, items.get(i), "loads[" + i + "]", length, areaLoads);
+            Entry entry = read(c, items.get(i), path + "[" + i + "]", length, areaLoads, members);
             if (entry != null) {
                 entries.add(entry);
             }
@@ -56,6 +75,12 @@ final class LoadReader {
                 result.add(e.load());
                 continue;
             }
+            if (e.reaction() != null) {
+                ReactionLoad r = e.reaction();
+                reactions.add(new ReactionLoad(r.member(), r.support(), r.at(), r.spacing(), r.from(), r.to(), r.note(),
+                        r.where(), result.size()));
+                continue;
+            }
             application++;
             for (TakeOff.Line line : takeOff.lines()) {
                 if (line.application() == application) { // the take-off numbers applications in the same order
@@ -64,7 +89,7 @@ final class LoadReader {
                 }
             }
         }
-        return new Read(result, takeOff);
+        return new Read(result, takeOff, reactions);
     }
 
     /** The note a line load from an area load carries: where it came from, and the engineer's words. */
@@ -78,29 +103,48 @@ final class LoadReader {
         return note.toString();
     }
 
-    private static Entry read(ReadContext c, YamlNode node, String path, Double length, Defined<AreaLoad> areaLoads) {
+    private static Entry read(ReadContext c, YamlNode node, String path, Double length, Defined<AreaLoad> areaLoads,
+                              Defined<Supporting> members) {
         ReadContext.Fields f = c.fields(node, path);
         if (f == null) {
             return null;
         }
         YamlNode typeNode = f.required("type");
-        String type = typeNode == null ? null : c.choice(typeNode, f.path("type"), List.of("point", "moment", "uniform", "linear", "area"));
+        String type = typeNode == null ? null : c.choice(typeNode, f.path("type"),
+                List.of("point", "moment", "uniform", "linear", "area", "reaction"));
         if ("area".equals(type)) {
             return area(c, f, length, areaLoads);
+        }
+        if ("reaction".equals(type)) {
+            if (members == null) {
+                c.error(typeNode, f.path("type"), "a reaction load brings another member's reaction: it belongs to a job with"
+                        + " members (write the load as type: point or uniform here)");
+                f.rejectUnknown(LOAD_KEYS, "member", "support", "at", "spacing", "from", "to", "note", "case");
+                return null;
+            }
+            ReactionLoad reaction = ReactionLoadReader.read(c, f, length, members);
+            return reaction == null ? null : new Entry(null, null, reaction, node.location());
+        }
+        if (f.has("member") || f.has("support") || f.has("spacing")) {
+            YamlNode.Entry first = f.node().entries().values().stream()
+                    .filter(e -> List.of("member", "support", "spacing").contains(e.key())).findFirst().orElseThrow();
+            c.error(first.keyLocation(), f.path(first.key()), "member, support and spacing belong to a reaction load:"
+                    + " write type: reaction to bring another member's reaction");
         }
         YamlNode caseNode = f.required("case");
         String loadCase = caseNode == null ? null : c.id(caseNode, f.path("case"));
         YamlNode noteNode = f.optional("note");
         String note = noteNode == null ? "" : c.text(noteNode, f.path("note"));
         if (type == null) {
-            f.rejectUnknown(LOAD_KEYS, "P", "M", "w", "at", "from", "to", "sense", "load", "width", "bearing");
+            f.rejectUnknown(LOAD_KEYS, "P", "M", "w", "at", "from", "to", "sense", "load", "width", "bearing", "member",
+                    "support", "spacing");
             return null;
         }
         if (f.has("width") || f.has("load")) {
             // the engineer meant an area load: say how to write one, not what is wrong with w
             c.error(f.node(), f.path("type"), "a tributary width belongs to an area load: write type: area, load: <a name under"
                     + " area_loads, which holds the pressure>, width: ...; or give the line load w without a width");
-            f.rejectUnknown(LOAD_KEYS, "P", "M", "w", "at", "from", "to", "sense", "bearing");
+            f.rejectUnknown(LOAD_KEYS, "P", "M", "w", "at", "from", "to", "sense", "bearing", "member", "support", "spacing");
             return null;
         }
         Load load = switch (type) {
@@ -109,7 +153,7 @@ final class LoadReader {
             case "uniform" -> uniform(c, f, loadCase, note, length, node.location());
             default -> linear(c, f, loadCase, note, length, node.location());
         };
-        f.rejectUnknown(LOAD_KEYS);
+        f.rejectUnknown(LOAD_KEYS, "member", "support", "spacing");
         return loadCase == null || note == null || load == null ? null : new Entry(load, null, node.location());
     }
 
@@ -128,7 +172,7 @@ final class LoadReader {
         String note = noteNode == null ? "" : c.text(noteNode, f.path("note"));
         Double[] widths = widths(c, f);
         Double[] range = range(c, f, length, false);
-        f.rejectUnknown(LOAD_KEYS, "case", "w");
+        f.rejectUnknown(LOAD_KEYS, "case", "w", "member", "support", "spacing");
         if (name == null || note == null || widths == null || range == null || f.has("case") || f.has("w")) {
             return null;
         }
@@ -161,7 +205,7 @@ final class LoadReader {
         return width == null ? null : new Double[] {width, width};
     }
 
-    private static Double at(ReadContext c, ReadContext.Fields f, Double length) {
+    static Double at(ReadContext c, ReadContext.Fields f, Double length) {
         YamlNode n = f.required("at");
         return n == null ? null : BeamReader.position(c, n, f.path("at"), length);
     }
@@ -221,7 +265,7 @@ final class LoadReader {
     }
 
     /** from and to; for a uniform load both may be left out (the whole beam) or either one. */
-    private static Double[] range(ReadContext c, ReadContext.Fields f, Double length, boolean required) {
+    static Double[] range(ReadContext c, ReadContext.Fields f, Double length, boolean required) {
         YamlNode fromNode = required ? f.required("from") : f.optional("from");
         YamlNode toNode = required ? f.required("to") : f.optional("to");
         Double from = fromNode == null ? (required ? null : Double.valueOf(0)) : BeamReader.position(c, fromNode, f.path("from"), length);

@@ -49,7 +49,11 @@ final class ReadContext {
     }
 
     void error(Location at, String path, String message) {
-        diagnostics.add(new Diagnostic(file, at, path, message));
+        Diagnostic d = new Diagnostic(file, at, path, message);
+        // the shared blocks of a job with members are read once per member: say each mistake once
+        if (!diagnostics.contains(d)) {
+            diagnostics.add(d);
+        }
     }
 
     /** A mapping, or a message saying what stood there instead. */
@@ -59,6 +63,17 @@ final class ReadContext {
         }
         error(node, path, "expected a mapping of keys and values, got " + node.describe());
         return null;
+    }
+
+    /**
+     * One member of a job with members, read as a single-beam job would be: the shared top-level
+     * keys with the member's own keys over them. A key the member gives is named by its place
+     * under {@code memberPath} (members[2].beam.length), a shared one as at the top of the file.
+     */
+    Fields member(YamlNode.Mapping shared, YamlNode.Mapping own, String memberPath) {
+        java.util.Map<String, YamlNode.Entry> entries = new java.util.LinkedHashMap<>(shared.entries());
+        entries.putAll(own.entries());
+        return new Fields(this, new YamlNode.Mapping(own.location(), entries), "", own.entries().keySet(), memberPath);
     }
 
     Optional<List<YamlNode>> list(YamlNode node, String path) {
@@ -195,11 +210,20 @@ final class ReadContext {
         private final YamlNode.Mapping mapping;
         private final String path;
         private final Set<String> known = new LinkedHashSet<>();
+        /** Keys a member gives itself in a job with members, named under {@link #ownPath}. */
+        private final Set<String> own;
+        private final String ownPath;
 
         private Fields(ReadContext context, YamlNode.Mapping mapping, String path) {
+            this(context, mapping, path, Set.of(), null);
+        }
+
+        private Fields(ReadContext context, YamlNode.Mapping mapping, String path, Set<String> own, String ownPath) {
             this.context = context;
             this.mapping = mapping;
             this.path = path;
+            this.own = Set.copyOf(own);
+            this.ownPath = ownPath;
         }
 
         YamlNode.Mapping node() {
@@ -207,6 +231,9 @@ final class ReadContext {
         }
 
         String path(String key) {
+            if (own.contains(key) || (ownPath != null && !mapping.entries().containsKey(key))) {
+                return ownPath + "." + key;
+            }
             return path.isEmpty() ? key : path + "." + key;
         }
 
@@ -226,7 +253,7 @@ final class ReadContext {
         YamlNode required(String key) {
             YamlNode value = optional(key);
             if (value == null) {
-                context.error(mapping, path(key), "missing: this " + (path.isEmpty() ? "file" : "entry")
+                context.error(mapping, path(key), "missing: this " + (ownPath != null ? "member" : path.isEmpty() ? "file" : "entry")
                         + " needs a \"" + key + "\"");
             }
             return value;

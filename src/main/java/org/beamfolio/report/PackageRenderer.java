@@ -30,6 +30,7 @@ import org.beamfolio.checks.CheckOutcome;
 public final class PackageRenderer {
     static final String TEMPLATE = "package.ftlx";
     static final String STYLE = "package.css";
+    static final String PROJECT_TEMPLATE = "project.ftlx";
 
     private final CompletableFuture<Configuration> templates;
     private final CompletableFuture<PdfRenderer> pdf;
@@ -95,8 +96,12 @@ public final class PackageRenderer {
     }
 
     private String xhtml(ReportModel model) {
+        return xhtml(TEMPLATE, model);
+    }
+
+    private String xhtml(String templateName, Object model) {
         try {
-            Template template = ready(templates).getTemplate(TEMPLATE);
+            Template template = ready(templates).getTemplate(templateName);
             StringWriter out = new StringWriter();
             template.process(Map.of("r", model), out);
             return out.toString();
@@ -123,5 +128,52 @@ public final class PackageRenderer {
         String flag = org.beamfolio.checks.ChecksVerdict.of(checks);
         return ready(pdf).render(xhtml, built.drawings(), job, result.job().project().date(), archival, result.job().project().title(),
                 flag);
+    }
+
+    /** One solved member of a job with members, for {@link #renderMembers}. */
+    public record Member(String id, AnalysisResult result, List<CheckOutcome> checks) {}
+
+    /** The XHTML of a package of several members, before layout. */
+    public String membersXhtml(List<Member> members) {
+        return xhtml(PROJECT_TEMPLATE, project(members).model());
+    }
+
+    /** One package of several members: cover, schedule, basis, each member's part, load path, sign-off, job file. */
+    public byte[] renderMembers(List<Member> members, boolean archival) {
+        Built built = project(members);
+        String xhtml = xhtml(PROJECT_TEMPLATE, built.model());
+        var job = members.get(0).result().job();
+        Map<String, PdfRenderer.Attachment> files = new java.util.LinkedHashMap<>();
+        for (Member m : members) {
+            var source = m.result().job();
+            files.putIfAbsent(source.name() + ".yaml", new PdfRenderer.Attachment(source.name() + ".yaml", source.sourceBytes(),
+                    "Job file of this calculation package"));
+        }
+        List<CheckOutcome> all = members.stream().flatMap(m -> m.checks().stream()).toList();
+        return ready(pdf).render(xhtml, built.drawings(), List.copyOf(files.values()), job.project().date(), archival,
+                job.project().title(), org.beamfolio.checks.ChecksVerdict.of(all));
+    }
+
+    private record Built(ProjectModel model, Map<String, Drawing> drawings) {}
+
+    /** Each member's part built as for a one-member package, its figures renamed under the member's prefix. */
+    private static Built project(List<Member> members) {
+        Map<String, Drawing> drawings = new java.util.LinkedHashMap<>();
+        List<ProjectPart.Built> parts = new java.util.ArrayList<>();
+        for (int i = 0; i < members.size(); i++) {
+            Member m = members.get(i);
+            ReportModelBuilder.Built built = new ReportModelBuilder(m.result()).build(m.checks());
+            for (Map.Entry<String, Drawing> d : built.drawings().entrySet()) {
+                // the basis and the cover are printed once, with the first member's sketches
+                boolean shared = d.getKey().equals(ReportModelBuilder.SIGN_CONVENTION) || d.getKey().equals(ReportModelBuilder.SEAL_BOX);
+                if (!shared) {
+                    drawings.put(ProjectPart.ns(i) + d.getKey(), d.getValue());
+                } else {
+                    drawings.putIfAbsent(d.getKey(), d.getValue());
+                }
+            }
+            parts.add(new ProjectPart.Built(m.id(), m.result(), m.checks(), built.model()));
+        }
+        return new Built(new ProjectPart(parts).build(), drawings);
     }
 }

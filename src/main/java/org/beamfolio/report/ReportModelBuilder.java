@@ -29,6 +29,10 @@ final class ReportModelBuilder {
     /** The model and its drawings by id. */
     record Built(ReportModel model, Map<String, Drawing> drawings) {}
 
+    /** The ids of the drawings the cover and the basis print. */
+    static final String SIGN_CONVENTION = "sign-convention";
+    static final String SEAL_BOX = "seal-box";
+
     private final AnalysisResult result;
     private final Texts t;
     private final Map<String, Drawing> drawings = new LinkedHashMap<>();
@@ -49,8 +53,8 @@ final class ReportModelBuilder {
         ReportModel.Sheet sheet = new ReportModel.Sheet(p.title(), p.number(), p.subject(), p.revision(), p.preparedBy(),
                 p.date(), p.checkedBy(), p.client(), p.location(), job.report().paper().name().toLowerCase(Locale.ROOT),
                 Version.get(), job.name() + ".yaml");
-        drawings.put("sign-convention", new SignConventionSketch());
-        drawings.put("seal-box", new org.beamfolio.report.drawing.SealBox());
+        drawings.put(SIGN_CONVENTION, new SignConventionSketch());
+        drawings.put(SEAL_BOX, new org.beamfolio.report.drawing.SealBox());
         LoadingPart loading = new LoadingPart(result, t, drawings);
         List<ReportModel.CombinationSheet> analyses = new CombinationPart(result, t, drawings).sheets(governing(checks));
         ReportModel.Envelope envelope = new CombinationPart(result, t, drawings).envelope();
@@ -199,7 +203,7 @@ final class ReportModelBuilder {
                     m.weightDensity() == null ? "not given" : t.q(m.weightDensity(), density),
                     optional(m.allowableTension()), optional(m.allowableCompression()), optional(m.allowableShear()), m.source()));
         }
-        return new ReportModel.Basis(codes, units, conventions, "sign-convention", method, limitations,
+        return new ReportModel.Basis(codes, units, conventions, SIGN_CONVENTION, method, limitations,
                 job.project().notes(), new ReportModel.Table(materialHeader, materialRows), new StressPart(result, t).summaryTable());
     }
 

@@ -41,11 +41,54 @@ public final class ResultsWriter {
         return text + "\n";
     }
 
+    /** One solved member of a job with members, with its checks. */
+    public record Member(String id, AnalysisResult result, List<CheckOutcome> checks) {}
+
+    /**
+     * The results file of a job with members: the format, the tool and the input's digest once,
+     * then under {@code members} each member's results exactly as a single-beam job's, with its id.
+     * A package gathered from several job files ({@code sha256} null) gives each member its own
+     * file's digest instead.
+     */
+    public static String writeMembers(String sha256, List<Member> members) {
+        StringWriter text = new StringWriter();
+        try (JsonGenerator g = JSON.createGenerator(text)) {
+            g.useDefaultPrettyPrinter();
+            g.writeStartObject();
+            g.writeStringField("format", FORMAT);
+            g.writeStringField("tool_version", Version.get());
+            if (sha256 != null) {
+                g.writeStringField("input_sha256", sha256);
+            }
+            g.writeArrayFieldStart("members");
+            for (Member m : members) {
+                g.writeStartObject();
+                g.writeStringField("id", m.id());
+                if (sha256 == null) {
+                    g.writeStringField("input_sha256", m.result().job().sha256());
+                }
+                body(g, m.result(), m.checks(), ReportUnits.of(m.result().job().report().units()));
+                g.writeEndObject();
+            }
+            g.writeEndArray();
+            g.writeEndObject();
+        } catch (IOException e) {
+            throw new UncheckedIOException("results could not be written", e);
+        }
+        return text + "\n";
+    }
+
     private static void write(JsonGenerator g, AnalysisResult result, List<CheckOutcome> checks, ReportUnits u) throws IOException {
         g.writeStartObject();
         g.writeStringField("format", FORMAT);
         g.writeStringField("tool_version", Version.get());
         g.writeStringField("input_sha256", result.job().sha256());
+        body(g, result, checks, u);
+        g.writeEndObject();
+    }
+
+    /** Everything after the header: solver, units, sections, combinations, envelope, reactions, checks. */
+    private static void body(JsonGenerator g, AnalysisResult result, List<CheckOutcome> checks, ReportUnits u) throws IOException {
         g.writeObjectFieldStart("solver");
         g.writeStringField("method", "direct stiffness, exact Euler-Bernoulli elements");
         g.writeNumberField("elements", result.model().elements());
@@ -138,7 +181,6 @@ public final class ResultsWriter {
             g.writeEndObject();
         }
         g.writeEndArray();
-        g.writeEndObject();
     }
 
     /**

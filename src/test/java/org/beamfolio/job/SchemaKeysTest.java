@@ -41,6 +41,7 @@ class SchemaKeysTest {
                 Arguments.of("sections.<id>", "/definitions/section", SectionReader.SECTION_KEYS),
                 Arguments.of("sections.<id>.plates[]", "/definitions/section/oneOf/*/properties/plates/items", SectionReader.PLATE_KEYS),
                 Arguments.of("loads[]", "/definitions/load", LoadReader.LOAD_KEYS),
+                Arguments.of("members[]", "/properties/members/items", MembersReader.MEMBER_KEYS),
                 Arguments.of("combinations[]", "/properties/combinations/oneOf/1/items", CombinationReader.COMBINATION_KEYS),
                 Arguments.of("checks", "/properties/checks", CombinationReader.CHECKS_KEYS),
                 Arguments.of("checks.deflection[]", "/properties/checks/properties/deflection/items", CombinationReader.DEFLECTION_KEYS));

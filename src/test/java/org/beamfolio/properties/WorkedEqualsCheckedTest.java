@@ -32,8 +32,9 @@ class WorkedEqualsCheckedTest {
     void everyExampleJobWorksWhatItChecks() throws Exception {
         int compared = 0;
         for (Path job : examples()) {
-            AnalysisResult r = Analysis.run(JobReader.read(job).job());
-            compared += compare(r, Checks.run(r), StressSteps.of(r), job.toString());
+            for (AnalysisResult r : TestJobs.solveEvery(job)) {
+                compared += compare(r, Checks.run(r), StressSteps.of(r), job.toString());
+            }
         }
         assertTrue(compared >= 9, "stress checks compared with their worked steps: " + compared);
     }

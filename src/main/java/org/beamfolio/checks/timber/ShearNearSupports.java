@@ -98,9 +98,7 @@ final class ShearNearSupports {
 
     /** The job solved again with the reduced loads, for the shear check only. */
     static org.beamfolio.analysis.AnalysisResult solve(Job job, double d) {
-        Job reduced = new Job(job.name(), job.sourceText(), job.sha256(), job.project(), job.report(), job.materials(),
-                job.sections(), job.beam(), reduced(job, d), job.cases(), job.combinationSet(), job.combinations(), job.pattern(),
-                job.stressCheck(), job.deflectionLimits(), job.sourceBytes(), job.takeOff(), job.steelDesign(), job.timber());
+        Job reduced = job.withLoads(reduced(job, d));
         try {
             return org.beamfolio.analysis.Analysis.run(reduced);
         } catch (org.beamfolio.analysis.UnstableBeamException e) {

@@ -41,7 +41,17 @@ final class PdfA {
     }
 
     /** The job file as an associated file (relationship Source), with its MIME type and date. */
-    static void attach(PdfWriter writer, PdfRenderer.Attachment attachment, Calendar date) throws IOException {
+    static void attach(PdfWriter writer, java.util.List<PdfRenderer.Attachment> attachments, Calendar date) throws IOException {
+        PdfArray associated = new PdfArray();
+        for (PdfRenderer.Attachment attachment : attachments) {
+            associated.add(attach(writer, attachment, date));
+        }
+        writer.getExtraCatalog().put(new PdfName("AF"), associated);
+    }
+
+    /** One job file embedded as an associated file of the document; returns its file specification's reference. */
+    private static com.lowagie.text.pdf.PdfIndirectReference attach(PdfWriter writer, PdfRenderer.Attachment attachment,
+                                                                    Calendar date) throws IOException {
         PdfDictionary parameters = new PdfDictionary();
         parameters.put(PdfName.MODDATE, new PdfDate(date));
         PdfFileSpecification file = PdfFileSpecification.fileEmbedded(writer, null, attachment.fileName(), attachment.bytes(),
@@ -50,9 +60,7 @@ final class PdfA {
         file.put(new PdfName("AFRelationship"), new PdfName("Source"));
         file.put(PdfName.DESC, new PdfString(attachment.description()));
         writer.addFileAttachment(attachment.description(), file);
-        PdfArray associated = new PdfArray();
-        associated.add(file.getReference());
-        writer.getExtraCatalog().put(new PdfName("AF"), associated);
+        return file.getReference();
     }
 
     /** XMP metadata: PDF/A-3 level B, and the same title, producer and dates as the information dictionary. */

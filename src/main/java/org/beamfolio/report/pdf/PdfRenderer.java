@@ -86,6 +86,12 @@ public final class PdfRenderer {
      */
     public byte[] render(String xhtml, Map<String, Drawing> drawings, Attachment attachment, String isoDate, boolean archival,
                          String title, String checksFlag) {
+        return render(xhtml, drawings, java.util.List.of(attachment), isoDate, archival, title, checksFlag);
+    }
+
+    /** As above, with every job file the package was built from attached. */
+    public byte[] render(String xhtml, Map<String, Drawing> drawings, java.util.List<Attachment> attachments, String isoDate,
+                         boolean archival, String title, String checksFlag) {
         try {
             ITextRenderer renderer = new ITextRenderer(fonts.resolver());
             fonts.prefixesFrom(seeded(xhtml));
@@ -102,12 +108,14 @@ public final class PdfRenderer {
                     try {
                         if (archival) {
                             PdfA.outputIntent(writer);
-                            PdfA.attach(writer, attachment, date);
+                            PdfA.attach(writer, attachments, date);
                             writer.setXmpMetadata(PdfA.xmp(title, PRODUCER, iso(date)));
                         } else {
-                            PdfFileSpecification file = PdfFileSpecification.fileEmbedded(writer, null, attachment.fileName(),
-                                    attachment.bytes());
-                            writer.addFileAttachment(attachment.description(), file);
+                            for (Attachment attachment : attachments) {
+                                PdfFileSpecification file = PdfFileSpecification.fileEmbedded(writer, null, attachment.fileName(),
+                                        attachment.bytes());
+                                writer.addFileAttachment(attachment.description(), file);
+                            }
                         }
                     } catch (IOException e) {
                         throw new UncheckedIOException(e);
