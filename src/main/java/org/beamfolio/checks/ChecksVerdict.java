@@ -23,6 +23,19 @@ public final class ChecksVerdict {
         return outcomes.isEmpty() ? "none" : "pass";
     }
 
+    /**
+     * The verdict of a package of several members: each failing check named under its member,
+     * {@code fail: G-1/deflection-L-max}.
+     */
+    public static String ofMembers(java.util.Map<String, List<CheckOutcome>> byMember) {
+        List<String> failing = byMember.entrySet().stream().flatMap(m -> m.getValue().stream().filter(c -> !c.pass())
+                .map(c -> m.getKey() + "/" + c.id())).toList();
+        if (!failing.isEmpty()) {
+            return "fail: " + String.join(", ", failing);
+        }
+        return byMember.values().stream().allMatch(List::isEmpty) ? "none" : "pass";
+    }
+
     /** True when the verdict says some check does not meet its limit. */
     public static boolean failing(String verdict) {
         return verdict != null && verdict.startsWith("fail");

@@ -203,7 +203,7 @@ final class Pipeline {
                     + "  nothing was written; an earlier package of the same name is unchanged\n");
             return new Outcome(Main.INTERNAL_FAILURE, messages);
         }
-        return finished(file, solved.checks(), pdf, results, document);
+        return finished(file, solved.checks(), failing(solved.checks(), ""), pdf, results, document);
     }
 
     /**
@@ -264,18 +264,25 @@ final class Pipeline {
             return new Outcome(Main.INTERNAL_FAILURE, List.of(file + ": internal failure while writing the package: " + e + "\n"
                     + "  nothing was written; an earlier package of the same name is unchanged\n"));
         }
-        return finished(file, solved.checks(), pdf, results, document);
+        List<String> failing = new ArrayList<>();
+        solved.members().forEach(m -> failing.addAll(failing(m.checks(), m.id() + "/")));
+        return finished(file, solved.checks(), failing, pdf, results, document);
+    }
+
+    /** Each check that does not meet its limit, named (under its member's id in a package of several) with its ratio. */
+    private static List<String> failing(List<CheckOutcome> checks, String prefix) {
+        return checks.stream().filter(c -> !c.pass())
+                .map(c -> prefix + c.id() + " (ratio " + org.beamfolio.units.Numbers.format(c.ratio()) + ")").toList();
     }
 
     /** The outcome of a package written: its status, and what the terminal is told of failing checks. */
-    private static Outcome finished(Path file, List<CheckOutcome> checks, Path pdf, Path results, byte[] document) {
+    private static Outcome finished(Path file, List<CheckOutcome> checks, List<String> failing, Path pdf, Path results,
+                                    byte[] document) {
         List<String> messages = new ArrayList<>();
         double ratio = checks.stream().mapToDouble(CheckOutcome::ratio).max().orElse(Double.NaN);
         boolean pass = checks.stream().allMatch(CheckOutcome::pass);
         if (!pass) {
-            messages.add(file + ": the package was written, but it DOES NOT MEET "
-                    + String.join(", ", checks.stream().filter(c -> !c.pass())
-                            .map(c -> c.id() + " (ratio " + org.beamfolio.units.Numbers.format(c.ratio()) + ")").toList())
+            messages.add(file + ": the package was written, but it DOES NOT MEET " + String.join(", ", failing)
                     + "; it is marked as failing\n");
         }
         return new Outcome(pass ? Main.OK : Main.CHECKS_FAIL, messages, pdf, results, pages(document), ratio, pass);

@@ -149,9 +149,10 @@ public final class PackageRenderer {
             files.putIfAbsent(source.name() + ".yaml", new PdfRenderer.Attachment(source.name() + ".yaml", source.sourceBytes(),
                     "Job file of this calculation package"));
         }
-        List<CheckOutcome> all = members.stream().flatMap(m -> m.checks().stream()).toList();
+        Map<String, List<CheckOutcome>> byMember = new java.util.LinkedHashMap<>();
+        members.forEach(m -> byMember.put(m.id(), m.checks()));
         return ready(pdf).render(xhtml, built.drawings(), List.copyOf(files.values()), job.project().date(), archival,
-                job.project().title(), org.beamfolio.checks.ChecksVerdict.of(all));
+                job.project().title(), org.beamfolio.checks.ChecksVerdict.ofMembers(byMember));
     }
 
     private record Built(ProjectModel model, Map<String, Drawing> drawings) {}

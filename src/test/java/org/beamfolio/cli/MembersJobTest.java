@@ -196,6 +196,28 @@ class MembersJobTest {
     }
 
     @Test
+    void aFailingMemberShowsOnTheCoverAndInTheSchedule(@TempDir Path dir) throws Exception {
+        Path job = dir.resolve("framing.yaml");
+        // B-1 as above carries 1920 lb of L on 16 ft; G-1's own limit of 0.001 in under L cannot be met
+        // by any real beam, so G-1 fails (and only G-1: B-1 and J-1 have no checks)
+        Files.writeString(job, LOAD_PATH.replace("    loads:\n      - { type: reaction, member: B-1, support: 2, at: 5 ft }\n",
+                "    loads:\n      - { type: reaction, member: B-1, support: 2, at: 5 ft }\n"
+                        + "    checks: { deflection: [ { cases: [ L ], max: 0.001 in } ] }\n"));
+        Run run = Run.of("build", job.toString(), "--out", dir.resolve("out").toString(), "--no-pdfa");
+        assertEquals(Main.CHECKS_FAIL, run.status(), run.err());
+        assertTrue(run.err().contains("DOES NOT MEET G-1/deflection-L-max (ratio "), run.err());
+        try (var pdf = org.apache.pdfbox.Loader.loadPDF(dir.resolve("out/framing.pdf").toFile())) {
+            var stripper = new org.apache.pdfbox.text.PDFTextStripper();
+            stripper.setEndPage(2);
+            String front = stripper.getText(pdf);
+            assertTrue(front.contains("DOES NOT MEET: one member has a check that exceeds its limit"), front);
+            assertTrue(front.contains("Member G-1: 1 check exceeds the limit"), front);
+            assertTrue(front.contains("EXCEEDS"), "the schedule marks the failing member");
+            assertEquals("fail: G-1/deflection-L-max", pdf.getDocumentInformation().getCustomMetadataValue("BeamfolioChecks"));
+        }
+    }
+
+    @Test
     void aCycleWritesNothing(@TempDir Path dir) throws Exception {
         Path job = dir.resolve("cycle.yaml");
         Files.writeString(job, HEADER + """
