@@ -234,7 +234,7 @@ public final class Field {
     public Extreme largestWithin(double from, double to) {
         Extreme best = new Extreme(0, from, null);
         for (int i = 0; i < starts.length; i++) {
-            if (starts[i] >= from - 1e-12 && ends[i] <= to + 1e-12) {
+            if (pieceWithin(i, from, to)) {
                 for (int sign : new int[] {1, -1}) {
                     Extreme e = extremeOf(i, sign);
                     if (Math.abs(e.value()) > Math.abs(best.value())) {
@@ -244,6 +244,11 @@ public final class Field {
             }
         }
         return best;
+    }
+
+    /** Whether piece i lies within [from, to] (a region's pieces end on its nodes, to round-off). */
+    public boolean pieceWithin(int i, double from, double to) {
+        return starts[i] >= from - 1e-12 && ends[i] <= to + 1e-12;
     }
 
     /**

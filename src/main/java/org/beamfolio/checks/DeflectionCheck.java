@@ -108,7 +108,7 @@ final class DeflectionCheck implements Check {
         for (Loading loading : loadings) {
             for (AnalysisResult.Span region : regions) {
                 Field f = relative ? SupportChord.relative(loading.deflection(), region, supportsAt) : loading.deflection();
-                Extreme e = largestIn(f, region);
+                Extreme e = f.largestWithin(region.from(), region.to());
                 if (best == null || Math.abs(e.value()) > Math.abs(best.extreme().value())) {
                     best = new Worst(e, loading);
                 }
@@ -124,28 +124,13 @@ final class DeflectionCheck implements Check {
         }
         Extreme absolute = new Extreme(0, regions.get(0).from(), null);
         for (AnalysisResult.Span region : regions) {
-            Extreme e = largestIn(worst.loading().deflection(), region);
+            Extreme e = worst.loading().deflection().largestWithin(region.from(), region.to());
             if (Math.abs(e.value()) > Math.abs(absolute.value())) {
                 absolute = e;
             }
         }
         return "; absolute deflection " + org.beamfolio.units.Numbers.format(u.deflection().fromSi(Math.abs(absolute.value())),
                 u.deflection().symbol()) + " at " + org.beamfolio.units.Numbers.format(u.length().fromSi(absolute.at()), u.length().symbol());
-    }
-
-    private static Extreme largestIn(Field f, AnalysisResult.Span region) {
-        Extreme best = new Extreme(0, region.from(), null);
-        for (int i = 0; i < f.size(); i++) {
-            if (SupportChord.inside(f.start(i), f.end(i), region)) {
-                for (int sign : new int[] {1, -1}) {
-                    Extreme e = f.extremeOf(i, sign);
-                    if (Math.abs(e.value()) > Math.abs(best.value())) {
-                        best = e;
-                    }
-                }
-            }
-        }
-        return best;
     }
 
     private static String trim(double v) {

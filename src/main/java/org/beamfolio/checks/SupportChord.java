@@ -30,17 +30,13 @@ final class SupportChord {
             starts[i] = deflection.start(i);
             ends[i] = deflection.end(i);
             Polynomial p = deflection.piece(i);
-            if (inside(starts[i], ends[i], region)) {
+            if (deflection.pieceWithin(i, region.from(), region.to())) {
                 // chord(x) = y1 + slope (x - x1), with x = start + s in the piece's local coordinate
                 p = p.plus(Polynomial.of(-(y1 + slope * (starts[i] - x1)), -slope));
             }
             pieces[i] = p;
         }
         return new Field(starts, ends, pieces);
-    }
-
-    static boolean inside(double start, double end, AnalysisResult.Span region) {
-        return start >= region.from() - 1e-12 && end <= region.to() + 1e-12;
     }
 
     /** {x1, y1, slope} of the line the region's deflection is measured from. */

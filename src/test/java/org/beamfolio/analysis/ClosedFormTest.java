@@ -214,6 +214,24 @@ class ClosedFormTest {
     }
 
     @Test
+    void largestDeflectionWithinEachRegionOfABeamLoadedOnItsOverhang() {
+        // AISC Manual Table 3-23, beam overhanging one support, uniform load on the overhang
+        // (from memory): span l = 4.5 m, overhang a = 1.5 m; between the supports the beam
+        // rises by at most w a^2 l^2 / (18 sqrt(3) E I) (= 0.03208 w a^2 l^2 / EI) at x = l / sqrt(3),
+        // and the free end falls by w a^3 (4l + 3a) / (24 E I). Deflection is positive down.
+        double l = 4.5;
+        double a = 1.5;
+        Field d = caseD(text("6 m", "    - { at: 0 m, type: pin }\n    - { at: 4.5 m, type: roller }\n",
+                "  - { case: D, type: uniform, w: 10 kN/m, from: 4.5 m, to: 6 m }\n")).deflection();
+        Extreme span = d.largestWithin(0, l);
+        near(-W * a * a * l * l / (18 * Math.sqrt(3) * EI), span.value(), "largest (upward) deflection in the span");
+        near(l / Math.sqrt(3), span.at(), "where");
+        Extreme overhang = d.largestWithin(l, l + a);
+        near(W * a * a * a * (4 * l + 3 * a) / (24 * EI), overhang.value(), "free-end deflection");
+        near(l + a, overhang.at(), "at the free end");
+    }
+
+    @Test
     void hingeInProppedBeamIsStaticallyDeterminate() {
         // By statics (free bodies by hand): fixed at 0, hinge at 4 m, roller at 6 m, uniform w.
         // The part from the hinge to the roller is a simple span of 2 m: the hinge carries w*2/2 = 10 kN.

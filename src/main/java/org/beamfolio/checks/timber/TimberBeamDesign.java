@@ -303,11 +303,9 @@ public final class TimberBeamDesign {
                 String name = String.join(" + ", limit.cases());
                 List<AnalysisResult.Span> regions = limit.spanRatio() != null ? result.spans() : List.of(whole());
                 for (AnalysisResult.Span region : regions) {
-                    Extreme worst = largestIn(delta, region);
-                    boolean overhang = !region.label().startsWith("span ") && limit.spanRatio() != null;
-                    double allowed = limit.spanRatio() != null
-                            ? (overhang ? 2 : 1) * (region.to() - region.from()) / limit.spanRatio() : limit.maximum();
-                    String text = limit.spanRatio() != null ? (overhang ? "2L/" : "L/") + trim(limit.spanRatio()) : "maximum";
+                    Extreme worst = delta.largestWithin(region.from(), region.to());
+                    double allowed = limit.spanRatio() != null ? region.limitLength() / limit.spanRatio() : limit.maximum();
+                    String text = limit.spanRatio() != null ? (region.overhang() ? "2L/" : "L/") + trim(limit.spanRatio()) : "maximum";
                     out.add(new TimberDesignResult.LongTerm(name, lt, st, region.label(), text, worst.at(),
                             Math.abs(worst.value()), allowed));
                 }
@@ -317,21 +315,6 @@ public final class TimberBeamDesign {
 
         private AnalysisResult.Span whole() {
             return new AnalysisResult.Span("beam", 0, result.job().beam().length(), false);
-        }
-
-        private static Extreme largestIn(Field f, AnalysisResult.Span region) {
-            Extreme best = new Extreme(0, region.from(), null);
-            for (int i = 0; i < f.size(); i++) {
-                if (f.start(i) >= region.from() - 1e-12 && f.end(i) <= region.to() + 1e-12) {
-                    for (int sign : new int[] {1, -1}) {
-                        Extreme e = f.extremeOf(i, sign);
-                        if (Math.abs(e.value()) > Math.abs(best.value())) {
-                            best = e;
-                        }
-                    }
-                }
-            }
-            return best;
         }
 
         private static String trim(double v) {
