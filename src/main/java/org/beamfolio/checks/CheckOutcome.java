@@ -3,9 +3,11 @@ package org.beamfolio.checks;
 import java.util.Collections;
 import java.util.LinkedHashMap;
 import java.util.Map;
+import org.beamfolio.units.Measure;
 
 /**
- * One check's outcome: demand against limit in the report's units ({@code unit}), their ratio,
+ * One check's outcome: demand against limit in SI units, what they measure (which decides the
+ * unit the report and the results file give them, {@link org.beamfolio.units.ReportUnits#unitOf}), their ratio,
  * whether it passes, the combination that governs and where (SI metres for {@code at}), and the
  * authority behind it as data.
  *
@@ -16,7 +18,7 @@ import java.util.Map;
  * @param factors the factors the limit depends on by symbol (Cb; CD, CL, CF ...), empty when none
  */
 public record CheckOutcome(String id, String description, double demand, double limit, double ratio, boolean pass,
-                           String combination, double at, String unit, CheckKind kind, String clause, String limitState,
+                           String combination, double at, Measure measure, CheckKind kind, String clause, String limitState,
                            Segment segment, Map<String, Double> factors) {
     public CheckOutcome {
         if (clause == null || clause.isBlank()) {
@@ -27,8 +29,8 @@ public record CheckOutcome(String id, String description, double demand, double 
 
     /** An outcome with a single limit state, no segment and no factors. */
     public CheckOutcome(String id, String description, double demand, double limit, double ratio, boolean pass,
-                        String combination, double at, String unit, CheckKind kind, String clause) {
-        this(id, description, demand, limit, ratio, pass, combination, at, unit, kind, clause, null, null, Map.of());
+                        String combination, double at, Measure measure, CheckKind kind, String clause) {
+        this(id, description, demand, limit, ratio, pass, combination, at, measure, kind, clause, null, null, Map.of());
     }
 
     /** A stretch of the beam, SI metres. */

@@ -10,6 +10,7 @@ import org.beamfolio.analysis.Field;
 import org.beamfolio.analysis.Patterns;
 import org.beamfolio.model.DeflectionLimit;
 import org.beamfolio.model.SupportKind;
+import org.beamfolio.units.Measure;
 import org.beamfolio.units.ReportUnits;
 
 /**
@@ -66,8 +67,8 @@ final class DeflectionCheck implements Check {
                             "Deflection under " + worst.loading().name() + " in " + span.label() + measured + ", limit "
                                     + (overhang ? "2L" : "L") + "/" + trim(limit.spanRatio())
                                     + absoluteBeside(relative, worst, List.of(span), u),
-                            u.deflection().fromSi(demand), u.deflection().fromSi(allowed), demand / allowed,
-                            demand <= allowed, worst.loading().name(), worst.extreme().at(), u.deflection().symbol(), CheckKind.DEFLECTION,
+                            demand, allowed, demand / allowed,
+                            demand <= allowed, worst.loading().name(), worst.extreme().at(), Measure.DEFLECTION, CheckKind.DEFLECTION,
                             AUTHORITY.citation()));
                 }
             } else {
@@ -77,8 +78,8 @@ final class DeflectionCheck implements Check {
                         "Largest deflection under " + worst.loading().name() + measured + " against a maximum of "
                                 + trim(u.deflection().fromSi(limit.maximum())) + " " + u.deflection().symbol()
                                 + absoluteBeside(relative, worst, result.spans(), u),
-                        u.deflection().fromSi(demand), u.deflection().fromSi(limit.maximum()), demand / limit.maximum(),
-                        demand <= limit.maximum(), worst.loading().name(), worst.extreme().at(), u.deflection().symbol(),
+                        demand, limit.maximum(), demand / limit.maximum(),
+                        demand <= limit.maximum(), worst.loading().name(), worst.extreme().at(), Measure.DEFLECTION,
                         CheckKind.DEFLECTION, AUTHORITY.citation()));
             }
         }

@@ -4,7 +4,7 @@ import java.util.List;
 import org.beamfolio.analysis.AnalysisResult;
 import org.beamfolio.analysis.GoverningStresses;
 import org.beamfolio.analysis.StressDemand;
-import org.beamfolio.units.ReportUnits;
+import org.beamfolio.units.Measure;
 
 /**
  * Extreme fibre bending stress against the material's allowable, in tension and in compression:
@@ -46,14 +46,13 @@ final class FibreStressCheck implements Check {
         if (d == null || !g.service()) {
             return List.of();
         }
-        ReportUnits u = ReportUnits.of(result.job().report().units());
         String what = kind == Kind.TENSION ? "tension" : "compression";
         // tension at the top or compression at the bottom comes from hogging
         boolean hogging = d.topFibre() == (kind == Kind.TENSION);
         String fibre = (d.topFibre() ? "top" : "bottom") + " fibre, " + (hogging ? "hogging" : "sagging") + " moment";
         double ratio = d.demand() / d.allowable();
         return List.of(new CheckOutcome(id(), "Extreme fibre bending stress in " + what + ", f = M c / I (" + fibre
-                + "), against the allowable", u.stress().fromSi(d.demand()), u.stress().fromSi(d.allowable()), ratio, ratio <= 1,
-                d.combination().name(), d.at(), u.stress().symbol(), CheckKind.STRESS, AUTHORITY.citation()));
+                + "), against the allowable", d.demand(), d.allowable(), ratio, ratio <= 1,
+                d.combination().name(), d.at(), Measure.STRESS, CheckKind.STRESS, AUTHORITY.citation()));
     }
 }

@@ -4,7 +4,7 @@ import java.util.List;
 import org.beamfolio.analysis.AnalysisResult;
 import org.beamfolio.analysis.GoverningStresses;
 import org.beamfolio.analysis.StressDemand;
-import org.beamfolio.units.ReportUnits;
+import org.beamfolio.units.Measure;
 
 /**
  * Shear stress, f_v = V Q / (I t) (the shear formula of elementary beam theory), at the neutral
@@ -36,11 +36,10 @@ final class ShearStressCheck implements Check {
         if (d == null || !g.service()) {
             return List.of();
         }
-        ReportUnits u = ReportUnits.of(result.job().report().units());
         double ratio = d.demand() / d.allowable();
         String cut = Double.isNaN(d.cutHeight()) ? "at the neutral axis" : "at the flange-to-web junction";
         return List.of(new CheckOutcome(id(), "Shear stress " + cut + ", f_v = V Q / (I t), against the allowable",
-                u.stress().fromSi(d.demand()), u.stress().fromSi(d.allowable()), ratio, ratio <= 1, d.combination().name(),
-                d.at(), u.stress().symbol(), CheckKind.STRESS, AUTHORITY.citation()));
+                d.demand(), d.allowable(), ratio, ratio <= 1, d.combination().name(),
+                d.at(), Measure.STRESS, CheckKind.STRESS, AUTHORITY.citation()));
     }
 }

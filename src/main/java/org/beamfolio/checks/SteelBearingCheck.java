@@ -7,8 +7,8 @@ import java.util.Map;
 import org.beamfolio.analysis.AnalysisResult;
 import org.beamfolio.design.steel.LimitStateResult;
 import org.beamfolio.design.steel.SteelDesignWork;
+import org.beamfolio.units.Measure;
 import org.beamfolio.units.ReportUnits;
-import org.beamfolio.units.Unit;
 
 /**
  * Web local yielding (AISC 360 J10.2) and web local crippling (J10.3) of a catalogue I-shape or
@@ -37,7 +37,6 @@ final class SteelBearingCheck implements Check {
             return List.of();
         }
         ReportUnits u = ReportUnits.of(result.job().report().units());
-        Unit force = SteelDesignChecks.force(result);
         Map<String, SteelDesignWork.BearingRow> worst = new LinkedHashMap<>();
         for (SteelDesignWork.BearingRow row : work.bearing()) {
             String id = row.strength().kind().replace(' ', '-') + (row.support() ? "-support" : "-load") + (row.index() + 1);
@@ -53,8 +52,8 @@ final class SteelBearingCheck implements Check {
             out.add(new CheckOutcome(e.getKey(), Character.toUpperCase(what.charAt(0)) + what.substring(1) + " at " + place
                     + ", bearing length " + SteelDesignChecks.number(u.sectionLength().fromSi(row.strength().factors().get("lb")))
                     + " " + u.sectionLength().symbol() + " (" + SteelDesignChecks.method(work.method()) + ")",
-                    force.fromSi(row.force()), force.fromSi(row.available()), row.ratio(), row.ratio() <= 1,
-                    row.combination().name(), row.at(), force.symbol(), CheckKind.BEARING, governing.clause().reference(),
+                    row.force(), row.available(), row.ratio(), row.ratio() <= 1,
+                    row.combination().name(), row.at(), Measure.DESIGN_FORCE, CheckKind.BEARING, governing.clause().reference(),
                     governing.limitState(), null, Map.of()));
         }
         return out;

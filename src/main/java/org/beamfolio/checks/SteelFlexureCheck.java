@@ -8,6 +8,7 @@ import org.beamfolio.analysis.AnalysisResult;
 import org.beamfolio.analysis.UnbracedSegments;
 import org.beamfolio.design.steel.LimitStateResult;
 import org.beamfolio.design.steel.SteelDesignWork;
+import org.beamfolio.units.Measure;
 import org.beamfolio.units.ReportUnits;
 import org.beamfolio.units.Unit;
 
@@ -37,7 +38,6 @@ final class SteelFlexureCheck implements Check {
         if (work == null) {
             return List.of();
         }
-        Unit moment = SteelDesignChecks.moment(result);
         Unit length = ReportUnits.of(result.job().report().units()).length();
         List<CheckOutcome> out = new ArrayList<>();
         for (SteelDesignWork.FlexureRow row : work.governingPerSegment()) {
@@ -54,8 +54,8 @@ final class SteelFlexureCheck implements Check {
                     "Flexure, " + seg.flange().label() + " flange " + from + " to " + to + " " + length.symbol()
                             + " in compression (" + braced + "), " + governing.limitState() + " governs ("
                             + SteelDesignChecks.method(work.method()) + ")",
-                    moment.fromSi(row.demand()), moment.fromSi(row.available()), row.ratio(), row.ratio() <= 1,
-                    row.combination().name(), seg.demand().at(), moment.symbol(), CheckKind.FLEXURE,
+                    row.demand(), row.available(), row.ratio(), row.ratio() <= 1,
+                    row.combination().name(), seg.demand().at(), Measure.DESIGN_MOMENT, CheckKind.FLEXURE,
                     governing.clause().reference(), governing.limitState(), new CheckOutcome.Segment(seg.from(), seg.to()),
                     factors));
         }

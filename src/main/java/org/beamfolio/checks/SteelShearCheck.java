@@ -6,7 +6,7 @@ import java.util.Map;
 import org.beamfolio.analysis.AnalysisResult;
 import org.beamfolio.design.steel.LimitStateResult;
 import org.beamfolio.design.steel.SteelDesignWork;
-import org.beamfolio.units.Unit;
+import org.beamfolio.units.Measure;
 
 /**
  * Shear of a catalogue steel shape, AISC 360 Chapter G (G2.1 for I-shapes and channels with Cv1,
@@ -32,13 +32,12 @@ final class SteelShearCheck implements Check {
         if (work == null) {
             return List.of();
         }
-        Unit force = SteelDesignChecks.force(result);
         return work.shear().stream().max(Comparator.comparingDouble(SteelDesignWork.ShearRow::ratio)).map(row -> {
             LimitStateResult governing = row.strength().governing();
             return List.of(new CheckOutcome(id(), "Shear, " + governing.limitState() + " ("
-                    + SteelDesignChecks.method(work.method()) + ")", force.fromSi(Math.abs(row.demand().value())),
-                    force.fromSi(row.available()), row.ratio(), row.ratio() <= 1, row.combination().name(),
-                    row.demand().at(), force.symbol(), CheckKind.SHEAR, governing.clause().reference(),
+                    + SteelDesignChecks.method(work.method()) + ")", Math.abs(row.demand().value()),
+                    row.available(), row.ratio(), row.ratio() <= 1, row.combination().name(),
+                    row.demand().at(), Measure.DESIGN_FORCE, CheckKind.SHEAR, governing.clause().reference(),
                     governing.limitState(), null, Map.of()));
         }).orElse(List.of());
     }

@@ -215,7 +215,7 @@ final class ReportModelBuilder {
         List<List<String>> rows = new ArrayList<>();
         List<Boolean> failing = new ArrayList<>();
         for (CheckOutcome c : checks) {
-            rows.add(List.of(c.id(), c.description(), c.clause(), Numbers.format(c.demand()) + " " + Texts.symbol(c.unit()), Numbers.format(c.limit()) + " " + Texts.symbol(c.unit()),
+            rows.add(List.of(c.id(), c.description(), c.clause(), t.checked(c.demand(), c.measure()), t.checked(c.limit(), c.measure()),
                     Numbers.format(c.ratio()), c.pass() ? "meets" : "EXCEEDS", c.combination(), t.len(c.at())));
             failing.add(!c.pass());
         }
@@ -232,7 +232,7 @@ final class ReportModelBuilder {
     private List<String> failing(List<CheckOutcome> checks) {
         return checks.stream().filter(c -> !c.pass())
                 .map(c -> c.id() + ", " + c.description() + ": ratio " + Numbers.format(c.ratio()) + " (demand "
-                        + Numbers.format(c.demand()) + " " + Texts.symbol(c.unit()) + " against a limit of " + Numbers.format(c.limit()) + " " + Texts.symbol(c.unit())
+                        + t.checked(c.demand(), c.measure()) + " against a limit of " + t.checked(c.limit(), c.measure())
                         + ") under " + c.combination() + " at " + t.len(c.at()))
                 .toList();
     }

@@ -1,6 +1,7 @@
 package org.beamfolio.report;
 
 import org.beamfolio.model.ReportSettings;
+import org.beamfolio.units.Measure;
 import org.beamfolio.units.Numbers;
 import org.beamfolio.units.ReportUnits;
 import org.beamfolio.units.Unit;
@@ -48,6 +49,11 @@ final class Texts {
 
     String q(double si, Unit unit) {
         return Numbers.format(unit.fromSi(si), symbol(unit));
+    }
+
+    /** A check's demand or limit (SI) in the unit the package gives what it measures. */
+    String checked(double si, Measure measure) {
+        return q(si, u.unitOf(measure));
     }
 
     String force(double si) {

@@ -153,13 +153,13 @@ public final class ResultsWriter {
             g.writeStartObject();
             g.writeStringField("id", check.id());
             g.writeStringField("description", check.description());
-            g.writeNumberField("demand", check.demand());
-            g.writeNumberField("limit", check.limit());
+            g.writeNumberField("demand", u.inReportUnit(check.demand(), check.measure()));
+            g.writeNumberField("limit", u.inReportUnit(check.limit(), check.measure()));
             g.writeNumberField("ratio", check.ratio());
             g.writeBooleanField("pass", check.pass());
             g.writeStringField("combination", check.combination());
             g.writeNumberField("at", u.length().fromSi(check.at()));
-            g.writeStringField("unit", check.unit());
+            g.writeStringField("unit", u.unitOf(check.measure()).symbol());
             g.writeStringField("kind", check.kind().key());
             g.writeStringField("clause", check.clause());
             if (check.limitState() != null) {

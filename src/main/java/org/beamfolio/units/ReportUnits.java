@@ -18,6 +18,25 @@ public record ReportUnits(Unit length, Unit force, Unit moment, Unit distributed
                         Units.of("kip*ft/rad"), Units.of("kip/in"), UnitSystem.US);
     }
 
+    /**
+     * The unit a checked quantity is reported in. Designs to a specification state forces and
+     * moments in kip and kip*ft (US) or kN and kN*m (SI), the units of the specification's worked
+     * examples, not the lb of the report's diagrams.
+     */
+    public Unit unitOf(Measure measure) {
+        return switch (measure) {
+            case STRESS -> stress;
+            case DEFLECTION -> deflection;
+            case DESIGN_FORCE -> Units.of(us() ? "kip" : "kN");
+            case DESIGN_MOMENT -> Units.of(us() ? "kip*ft" : "kN*m");
+        };
+    }
+
+    /** A checked value, SI inside, in the unit the report gives it ({@link #unitOf(Measure)}). */
+    public double inReportUnit(double si, Measure measure) {
+        return unitOf(measure).fromSi(si);
+    }
+
     public boolean us() {
         return system == UnitSystem.US;
     }

@@ -7,6 +7,7 @@ import java.util.List;
 import org.beamfolio.TestJobs;
 import org.beamfolio.analysis.AnalysisResult;
 import org.beamfolio.checks.CheckOutcome;
+import org.beamfolio.units.Measure;
 import org.junit.jupiter.api.Test;
 
 /** Fibre, shear and deflection checks against values worked by hand in the test. */
@@ -37,16 +38,17 @@ class StressChecksTest {
                 + 4000 * Math.pow(190 - y * 1e3, 2)) * 1e-12;
         double hogging = 10e3 * 3 * 3 / 8;
         CheckOutcome tension = find(checks, "stress-tension");
-        assertEquals(hogging * y / i / 1e6, tension.demand(), 1e-9 * tension.demand(), "MPa, M c_top / I");
+        assertEquals(hogging * y / i, tension.demand(), 1e-9 * tension.demand(), "Pa, M c_top / I");
+        assertEquals(Measure.STRESS, tension.measure(), "reported as a stress (MPa in this job)");
         assertEquals(3.0, tension.at(), 1e-12, "over the interior support");
         assertTrue(tension.description().contains("top fibre, hogging moment"), tension.description());
-        assertEquals(tension.demand() / 165, tension.ratio(), 1e-12, "against the 165 MPa allowable of the test material");
+        assertEquals(tension.demand() / 165e6, tension.ratio(), 1e-12, "against the 165 MPa allowable of the test material");
         // compression: sagging at the top fibre, 6.328 * 0.15897 = 1.006, beats hogging at the
         // bottom fibre, 11.25 * 0.04103 = 0.4616 (kN*m * m, both over I)
         CheckOutcome compression = find(checks, "stress-compression");
         assertTrue(compression.description().contains("top fibre, sagging moment"), compression.description());
         double sagging = 9 * 10e3 * 3 * 3 / 128;
-        assertEquals(sagging * y / i / 1e6, compression.demand(), 1e-9 * compression.demand());
+        assertEquals(sagging * y / i, compression.demand(), 1e-9 * compression.demand());
         assertEquals(3 * 3.0 / 8, Math.min(compression.at(), 6 - compression.at()), 1e-9, "3l/8 from an end support");
     }
 
@@ -69,11 +71,11 @@ class StressChecksTest {
                 + 4000 * Math.pow(190 - y * 1e3, 2)) * 1e-12;
         double q = 0.010 * y * y / 2;
         double v = 5 * 10e3 * 3 / 8;
-        double fv = v * q / (i * 0.010) / 1e6;
+        double fv = v * q / (i * 0.010);
         CheckOutcome shear = find(checks, "stress-shear");
-        assertEquals(fv, shear.demand(), 1e-9 * fv, "MPa, V Q / (I t)");
-        assertEquals(100, shear.limit(), 1e-12, "the shear allowable, not the tension or compression one");
-        assertEquals(fv / 100, shear.ratio(), 1e-12);
+        assertEquals(fv, shear.demand(), 1e-9 * fv, "Pa, V Q / (I t)");
+        assertEquals(100e6, shear.limit(), 1e-6, "the shear allowable, not the tension or compression one");
+        assertEquals(fv / 100e6, shear.ratio(), 1e-12);
         assertEquals(3.0, shear.at(), 1e-9, "beside the interior support");
     }
 
@@ -100,11 +102,12 @@ class StressChecksTest {
         List<CheckOutcome> checks = Checks.run(TestJobs.solve(text));
         double tip = 10e3 * Math.pow(6, 4) / (8 * TestJobs.EI);
         CheckOutcome ratio = find(checks, "deflection-D-right-cantilever");
-        assertEquals(tip * 1e3, ratio.demand(), 1e-9);
-        assertEquals(2 * 6.0 / 180 * 1e3, ratio.limit(), 1e-9);
+        assertEquals(tip, ratio.demand(), 1e-12, "metres");
+        assertEquals(Measure.DEFLECTION, ratio.measure(), "reported as a deflection (mm in this job)");
+        assertEquals(2 * 6.0 / 180, ratio.limit(), 1e-12);
         assertEquals(tip / (12.0 / 180), ratio.ratio(), 1e-12);
         CheckOutcome max = find(checks, "deflection-D-max");
-        assertEquals(50, max.limit(), 1e-12);
-        assertEquals(tip * 1e3 > 50, !max.pass());
+        assertEquals(0.050, max.limit(), 1e-15);
+        assertEquals(tip > 0.050, !max.pass());
     }
 }

@@ -17,6 +17,7 @@ import org.beamfolio.derivation.Step;
 import org.beamfolio.derivation.StressSteps;
 import org.beamfolio.job.JobReader;
 import org.beamfolio.checks.CheckOutcome;
+import org.beamfolio.units.ReportUnits;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -89,9 +90,9 @@ class WorkedEqualsCheckedTest {
         List<CheckOutcome> checks = Checks.run(r);
         List<Step> steps = StressSteps.of(r);
         compare(r, checks, steps, "tee");
-        assertEquals(2747.97, demand(checks, "stress-tension"), 0.01);
-        assertEquals(4861.79, demand(checks, "stress-compression"), 0.01);
-        assertEquals(238.93, demand(checks, "stress-shear"), 0.01);
+        assertEquals(2747.97, demand(r, checks, "stress-tension"), 0.01);
+        assertEquals(4861.79, demand(r, checks, "stress-compression"), 0.01);
+        assertEquals(238.93, demand(r, checks, "stress-shear"), 0.01);
         for (String what : List.of("Largest tension", "Largest compression")) {
             Step s = step(steps, what);
             assertTrue(s.statement().contains("just left of x = 16"), s.statement());
@@ -100,8 +101,14 @@ class WorkedEqualsCheckedTest {
         assertTrue(step(steps, "Largest shear stress").substituted().startsWith("τ = 4,000 [lb]"), step(steps, "Largest shear").substituted());
     }
 
-    private static double demand(List<CheckOutcome> checks, String id) {
-        return checks.stream().filter(c -> c.id().equals(id)).findFirst().orElseThrow().demand();
+    /** A check's demand as the package prints it, in the report's units. */
+    private static double demand(AnalysisResult r, List<CheckOutcome> checks, String id) {
+        return reported(r, checks.stream().filter(c -> c.id().equals(id)).findFirst().orElseThrow());
+    }
+
+    /** The worked steps print report units; the check keeps SI and is converted at the edge, once. */
+    private static double reported(AnalysisResult r, CheckOutcome c) {
+        return ReportUnits.of(r.job().report().units()).inReportUnit(c.demand(), c.measure());
     }
 
     private static Step step(List<Step> steps, String statement) {
@@ -126,7 +133,7 @@ class WorkedEqualsCheckedTest {
             if (c.demand() == 0) {
                 assertTrue(Double.isNaN(s.value()), job + ": " + c.id() + " has no demand, and the step says so: " + s.statement());
             } else {
-                assertEquals(c.demand(), Math.abs(s.value()), 0.0, job + ": " + c.id() + " checked against worked " + s.statement());
+                assertEquals(reported(r, c), Math.abs(s.value()), 0.0, job + ": " + c.id() + " checked against worked " + s.statement());
                 assertTrue(s.statement().contains(" under " + c.combination()), job + ": " + c.id() + " under " + c.combination()
                         + ", worked: " + s.statement());
             }

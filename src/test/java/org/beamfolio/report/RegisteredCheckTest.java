@@ -17,6 +17,7 @@ import org.beamfolio.checks.CheckOutcome;
 import org.beamfolio.checks.CheckRegistry;
 import org.beamfolio.job.JobReader;
 import org.beamfolio.job.JobReading;
+import org.beamfolio.units.Measure;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -41,8 +42,8 @@ class RegisteredCheckTest {
 
         @Override
         public List<CheckOutcome> run(AnalysisResult result) {
-            return List.of(new CheckOutcome("camber-1", "Camber against the example limit", 2, 1, 2, false, "D",
-                    result.job().beam().length() / 2, "in", CheckKind.DEFLECTION, AUTHORITY.citation(), "camber", null,
+            return List.of(new CheckOutcome("camber-1", "Camber against the example limit", 0.002, 0.001, 2, false, "D",
+                    result.job().beam().length() / 2, Measure.DEFLECTION, CheckKind.DEFLECTION, AUTHORITY.citation(), "camber", null,
                     Map.of("k", 1.0)));
         }
     }
@@ -59,6 +60,7 @@ class RegisteredCheckTest {
             String text = new PDFTextStripper().getText(doc).replaceAll("\\s+", " ");
             assertTrue(text.contains("Example Camber Standard 12-26 4.5.6"), "the clause in the checks table");
             assertTrue(text.contains("DOES NOT MEET"), "its failure on the cover and the checks sheet");
+            assertTrue(text.contains("(demand 2 mm against a limit of 1 mm)"), "its SI values in the report's units");
         }
     }
 }

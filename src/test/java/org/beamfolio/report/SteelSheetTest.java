@@ -38,7 +38,7 @@ class SteelSheetTest {
                 "the caution that buckling is not checked is replaced");
         // the sheet's available strength is the flexure check's limit, printed once from one value
         CheckOutcome flexure = checks.stream().filter(c -> c.kind() == org.beamfolio.checks.CheckKind.FLEXURE).findFirst().orElseThrow();
-        String limit = org.beamfolio.units.Numbers.format(flexure.limit());
+        String limit = org.beamfolio.units.Numbers.format(org.beamfolio.units.Units.of("kip*ft").fromSi(flexure.limit()));
         assertTrue(xhtml.contains("(" + limit + " kip·ft available"), "available strength " + limit + " on the sheet:\n"
                 + xhtml.substring(xhtml.indexOf("Available flexural strength")).substring(0, 600));
     }

@@ -10,7 +10,7 @@ import org.beamfolio.checks.Authority;
 import org.beamfolio.checks.Check;
 import org.beamfolio.checks.CheckKind;
 import org.beamfolio.checks.CheckOutcome;
-import org.beamfolio.units.ReportUnits;
+import org.beamfolio.units.Measure;
 
 /**
  * The NDS 2018 checks of a timber beam (allowable stress design), each the governing one over the
@@ -39,8 +39,6 @@ public final class TimberChecks implements Check {
         if (d == null) {
             return List.of();
         }
-        ReportUnits u = ReportUnits.of(result.job().report().units());
-        String stress = u.stress().symbol();
         int count = d.bending().size();
         List<CheckOutcome> out = new ArrayList<>();
         TimberDesignResult.Bending b = d.governingBending();
@@ -51,7 +49,7 @@ public final class TimberChecks implements Check {
                     + "CD = " + b.cd().factor() + " (" + b.durationCase() + ", " + b.cd().key().replace('_', ' ') + "), "
                     + stability + " = " + String.format(java.util.Locale.ROOT, "%.3f", b.adjusted().factor(b.adjusted().governingStability()))
                     + "; governing of " + count + " combinations",
-                    u.stress().fromSi(b.fb()), u.stress().fromSi(b.limit()), b.ratio(), b.ratio() <= 1, b.combination(), b.at(), stress,
+                    b.fb(), b.limit(), b.ratio(), b.ratio() <= 1, b.combination(), b.at(), Measure.STRESS,
                     CheckKind.FLEXURE, "NDS 2018 3.3.1, " + d.values().kind().applicability(),
                     b.adjusted().stability() != null ? "bending with lateral stability (CL)" : "bending",
                     new CheckOutcome.Segment(b.segment().from(), b.segment().to()),
@@ -66,15 +64,15 @@ public final class TimberChecks implements Check {
                     + " (" + s.durationCase() + "); " + (s.nearSupportsReduced()
                     ? "loads within d of the bearings' faces left out, concentrated ones times x/d (NDS 3.4.3.1(a))"
                     : "no support has a bearing length, so every load is kept (conservative)"),
-                    u.stress().fromSi(s.fv()), u.stress().fromSi(s.adjusted().value()), s.ratio(), s.ratio() <= 1,
-                    s.combination(), s.at(), stress,
+                    s.fv(), s.adjusted().value(), s.ratio(), s.ratio() <= 1,
+                    s.combination(), s.at(), Measure.STRESS,
                     CheckKind.SHEAR, "NDS 2018 3.4.2, Eq. 3.4-2", "shear parallel to grain", null, f));
         }
         for (TimberDesignResult.Bearing br : d.bearing()) {
             out.add(new CheckOutcome("nds-bearing-R" + br.support(), "Bearing at R" + br.support()
                     + ", fc_perp = R / (b lb) against Fc_perp' (no load-duration factor)",
-                    u.stress().fromSi(br.stress()), u.stress().fromSi(br.adjusted().value()), br.ratio(), br.ratio() <= 1,
-                    br.combination(), br.at(), stress,
+                    br.stress(), br.adjusted().value(), br.ratio(), br.ratio() <= 1,
+                    br.combination(), br.at(), Measure.STRESS,
                     CheckKind.BEARING, "NDS 2018 3.10.2, 3.10.4", "compression perpendicular to grain", null,
                     factors(br.adjusted().factors())));
         }
@@ -84,8 +82,8 @@ public final class TimberChecks implements Check {
                     "Long-term deflection in " + lt.region() + ", Kcr (" + String.join(" + ", lt.longTermCases()) + ")"
                             + (lt.shortTermCases().isEmpty() ? "" : " + " + String.join(" + ", lt.shortTermCases()))
                             + " with Kcr = " + d.kcr().value() + ", limit " + lt.limitText(),
-                    u.deflection().fromSi(lt.deflection()), u.deflection().fromSi(lt.allowed()), lt.ratio(), lt.ratio() <= 1,
-                    lt.limitCases(), lt.at(), u.deflection().symbol(),
+                    lt.deflection(), lt.allowed(), lt.ratio(), lt.ratio() <= 1,
+                    lt.limitCases(), lt.at(), Measure.DEFLECTION,
                     CheckKind.DEFLECTION, "NDS 2018 3.5.2, Eq. 3.5-1", "long-term deflection with creep", null,
                     Map.of("Kcr", d.kcr().value())));
         }
