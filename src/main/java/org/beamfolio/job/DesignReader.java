@@ -1,5 +1,6 @@
 package org.beamfolio.job;
 
+import java.util.Set;
 import org.beamfolio.loads.LiveLoadReduction;
 import org.beamfolio.loads.ReductionSettings;
 
@@ -9,6 +10,19 @@ import org.beamfolio.loads.ReductionSettings;
  * rise per foot), each may be {@code none}.
  */
 final class DesignReader {
+    /**
+     * The keys of {@code design}: the reductions read here, {@code steel} and {@code method} by
+     * {@link SteelDesignReader}, {@code timber}, {@code method}, {@code timber_service} and
+     * {@code durations} by {@link TimberDesignReader}.
+     */
+    static final Set<String> DESIGN_KEYS = Set.of("live_load_reduction", "roof_live_load_reduction", "steel", "method", "timber", "timber_service", "durations");
+
+    /** The keys of {@code design.live_load_reduction} given as a mapping. */
+    static final Set<String> LIVE_LOAD_REDUCTION_KEYS = Set.of("KLL", "floors");
+
+    /** The keys of {@code design.roof_live_load_reduction} given as a mapping. */
+    static final Set<String> ROOF_LIVE_LOAD_REDUCTION_KEYS = Set.of("rise");
+
     private DesignReader() {}
 
     /**
@@ -46,7 +60,7 @@ final class DesignReader {
                     ok &= n != null;
                     floors = n == null ? 1 : n.intValue();
                 }
-                l.rejectUnknown();
+                l.rejectUnknown(LIVE_LOAD_REDUCTION_KEYS);
             }
         }
         Double rise = null;
@@ -63,7 +77,7 @@ final class DesignReader {
                     rise = null;
                 }
                 ok &= rise != null;
-                r.rejectUnknown();
+                r.rejectUnknown(ROOF_LIVE_LOAD_REDUCTION_KEYS);
             }
         }
         return ok ? new ReductionSettings(kll, floors, rise, live != null, roof != null) : null;

@@ -14,6 +14,7 @@ import java.util.HexFormat;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Set;
 import org.beamfolio.catalogue.SteelGrade;
 import org.beamfolio.model.Beam;
 import org.beamfolio.model.Job;
@@ -38,7 +39,28 @@ public final class JobReader {
     /** Job files larger than this are refused before parsing. */
     public static final long MAX_FILE_BYTES = 4L * 1024 * 1024;
 
+    /** The top-level keys of a job file. */
+    static final Set<String> TOP_KEYS = Set.of("beamfolio", "project", "report", "materials", "sections", "beam", "area_loads", "loads", "cases", "combinations", "pattern", "checks", "design");
+
+    /** The keys of a steel or other non-timber material, {@code materials.<id>}. */
+    static final Set<String> MATERIAL_KEYS = Set.of("grade", "E", "density", "allowable", "source", "Fy", "Fu");
+
+    /** The keys of {@code materials.<id>.allowable}. */
+    static final Set<String> ALLOWABLE_KEYS = Set.of("tension", "compression", "shear");
+
+    /**
+     * What any material may name: either kind's keys. Every material is asked whether it names
+     * {@code timber}, and a timber material is asked for {@code allowable} only to refuse it.
+     */
+    private static final Set<String> ANY_MATERIAL_KEYS = union(MATERIAL_KEYS, TimberMaterialReader.KEYS);
+
     private JobReader() {}
+
+    private static Set<String> union(Set<String> a, Set<String> b) {
+        Set<String> all = new java.util.HashSet<>(a);
+        all.addAll(b);
+        return Set.copyOf(all);
+    }
 
     public static JobReading read(Path file) {
         String label = file.toString();
@@ -206,9 +228,9 @@ public final class JobReader {
             SteelDesign steel = SteelDesignReader.read(context, design, combos == null ? null : combos.setName(), beam,
                     materials, sections, sectionsNode, materialsNode);
             if (design != null) {
-                design.rejectUnknown();
+                design.rejectUnknown(DesignReader.DESIGN_KEYS);
             }
-            top.rejectUnknown();
+            top.rejectUnknown(TOP_KEYS);
             if (!context.diagnostics().isEmpty() || project == null || beam == null || combos == null) {
                 return null;
             }
@@ -273,7 +295,7 @@ public final class JobReader {
                 }
                 if (f.has("timber")) {
                     Material timber = TimberMaterialReader.read(context, f, entry.key());
-                    f.rejectUnknown();
+                    f.rejectUnknown(ANY_MATERIAL_KEYS);
                     if (timber != null) {
                         result.put(entry.key(), timber);
                     }
@@ -282,7 +304,7 @@ public final class JobReader {
                 YamlNode gradeNode = f.optional("grade");
                 SteelGrade grade = gradeNode == null ? null : CatalogueSections.grade(context, gradeNode, f.path("grade"));
                 if (gradeNode != null && grade == null) {
-                    f.rejectUnknown("E", "density", "allowable", "source", "Fy", "Fu");
+                    f.rejectUnknown(ANY_MATERIAL_KEYS, "E", "density", "allowable", "source", "Fy", "Fu");
                     continue;
                 }
                 Double e = grade == null ? req(f, "E", Dimension.STRESS) : opt(f, "E", Dimension.STRESS);
@@ -306,13 +328,13 @@ public final class JobReader {
                         tension = opt(a, "tension", Dimension.STRESS);
                         compression = opt(a, "compression", Dimension.STRESS);
                         shear = opt(a, "shear", Dimension.STRESS);
-                        a.rejectUnknown();
+                        a.rejectUnknown(ALLOWABLE_KEYS);
                     }
                 }
                 YamlNode source = f.optional("source");
                 String sourceText = source == null ? (grade == null ? "" : grade.standard())
                         : context.text(source, f.path("source"));
-                f.rejectUnknown();
+                f.rejectUnknown(ANY_MATERIAL_KEYS);
                 if (e != null) {
                     result.put(entry.key(), new Material(entry.key(), e, density, tension, compression, shear,
                             sourceText == null ? "" : sourceText, grade == null ? null : grade.label(), fy, fu));

@@ -28,6 +28,9 @@ final class TimberDesignReader {
     static final List<String> STANDARDS = List.of("NDS-2018");
     static final List<String> TEMPERATURES = List.of("normal", "elevated", "high");
 
+    /** The keys of {@code design.timber_service}. */
+    static final Set<String> SERVICE_KEYS = Set.of("wet", "temperature", "repetitive", "incised");
+
     private TimberDesignReader() {}
 
     /** The timber design, or null when the job asks for none or something is wrong (then with its message). */
@@ -133,7 +136,7 @@ final class TimberDesignReader {
         Boolean incised = flag(c, f, "incised");
         YamlNode t = f.optional("temperature");
         String temperature = t == null ? "normal" : c.choice(t, f.path("temperature"), TEMPERATURES);
-        f.rejectUnknown();
+        f.rejectUnknown(SERVICE_KEYS);
         if (wet == null || repetitive == null || incised == null || temperature == null) {
             return null;
         }

@@ -1,6 +1,7 @@
 package org.beamfolio.job;
 
 import java.util.List;
+import java.util.Set;
 import org.beamfolio.model.timber.SizeClass;
 import org.beamfolio.model.timber.TimberKind;
 import org.beamfolio.model.timber.TimberValues;
@@ -13,6 +14,9 @@ import org.beamfolio.units.Dimension;
  * every reference value is required.
  */
 final class TimberMaterialReader {
+    /** The keys of a timber material, {@code materials.<id>} with {@code timber}. */
+    static final Set<String> KEYS = Set.of("timber", "Fb", "Fb_neg", "Fv", "Fc_perp", "E", "Emin", "density", "size_factor", "species", "source");
+
     static final List<String> KINDS = List.of("sawn", "glulam", "scl");
     static final List<String> SIZE_CLASSES = List.of("dimension", "timber", "none");
     static final List<String> SPECIES = List.of("southern_pine", "other");

@@ -31,6 +31,7 @@ class SchemaKeysTest {
 
     static Stream<Arguments> blocks() {
         return Stream.of(
+                Arguments.of("top level", "", JobReader.TOP_KEYS),
                 Arguments.of("project", "/properties/project", ProjectReader.PROJECT_KEYS),
                 Arguments.of("project.history[]", "/properties/project/properties/history/items", ProjectReader.HISTORY_KEYS),
                 Arguments.of("report", "/properties/report", ProjectReader.REPORT_KEYS),
@@ -38,13 +39,20 @@ class SchemaKeysTest {
                 Arguments.of("beam.supports[]", "/definitions/support", BeamReader.SUPPORT_KEYS),
                 Arguments.of("beam.segments[]", "/properties/beam/properties/segments/items", BeamReader.SEGMENT_KEYS),
                 Arguments.of("beam.bracing", "/properties/beam/properties/bracing", BeamReader.BRACING_KEYS),
+                Arguments.of("materials.<id>, steel or other", "/definitions/material/oneOf/0", JobReader.MATERIAL_KEYS),
+                Arguments.of("materials.<id>.allowable", "/definitions/material/oneOf/0/properties/allowable", JobReader.ALLOWABLE_KEYS),
+                Arguments.of("materials.<id>, timber", "/definitions/material/oneOf/1", TimberMaterialReader.KEYS),
                 Arguments.of("sections.<id>", "/definitions/section", SectionReader.SECTION_KEYS),
                 Arguments.of("sections.<id>.plates[]", "/definitions/section/oneOf/*/properties/plates/items", SectionReader.PLATE_KEYS),
                 Arguments.of("loads[]", "/definitions/load", LoadReader.LOAD_KEYS),
                 Arguments.of("members[]", "/properties/members/items", MembersReader.MEMBER_KEYS),
                 Arguments.of("combinations[]", "/properties/combinations/oneOf/1/items", CombinationReader.COMBINATION_KEYS),
                 Arguments.of("checks", "/properties/checks", CombinationReader.CHECKS_KEYS),
-                Arguments.of("checks.deflection[]", "/properties/checks/properties/deflection/items", CombinationReader.DEFLECTION_KEYS));
+                Arguments.of("checks.deflection[]", "/properties/checks/properties/deflection/items", CombinationReader.DEFLECTION_KEYS),
+                Arguments.of("design", "/properties/design", DesignReader.DESIGN_KEYS),
+                Arguments.of("design.live_load_reduction", "/properties/design/properties/live_load_reduction/oneOf/1", DesignReader.LIVE_LOAD_REDUCTION_KEYS),
+                Arguments.of("design.roof_live_load_reduction", "/properties/design/properties/roof_live_load_reduction/oneOf/1", DesignReader.ROOF_LIVE_LOAD_REDUCTION_KEYS),
+                Arguments.of("design.timber_service", "/properties/design/properties/timber_service", TimberDesignReader.SERVICE_KEYS));
     }
 
     @ParameterizedTest(name = "{0}")
