@@ -40,7 +40,8 @@ public final class JobReader {
     public static final long MAX_FILE_BYTES = 4L * 1024 * 1024;
 
     /** The top-level keys of a job file. */
-    static final Set<String> TOP_KEYS = Set.of("beamfolio", "project", "report", "materials", "sections", "beam", "area_loads", "loads", "cases", "combinations", "pattern", "checks", "design");
+    static final Set<String> TOP_KEYS = Set.of("beamfolio", "project", "report", "materials", "sections", "beam", "area_loads", "loads", "cases", "combinations", "pattern", "checks", "design",
+            "members");
 
     /** The keys of a steel or other non-timber material, {@code materials.<id>}. */
     static final Set<String> MATERIAL_KEYS = Set.of("grade", "E", "density", "allowable", "source", "Fy", "Fu");
