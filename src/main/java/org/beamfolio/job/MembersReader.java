@@ -95,8 +95,12 @@ final class MembersReader {
     }
 
     private static String sharedOnly(String key) {
-        return "a member gives only " + String.join(", ", new java.util.TreeSet<>(MEMBER_KEYS)) + "; \"" + key
-                + "\" is shared by every member: write it at the top of the file";
+        String allowed = " (a member gives only " + String.join(", ", new java.util.TreeSet<>(MEMBER_KEYS)) + ")";
+        if (JobReader.TOP_KEYS.contains(key)) {
+            return "\"" + key + "\" is shared by every member: write it at the top of the file" + allowed;
+        }
+        String hint = org.beamfolio.units.Suggest.closest(key, MEMBER_KEYS).map(s -> "; did you mean \"" + s + "\"?").orElse("");
+        return "unknown key" + hint + allowed;
     }
 
     /** Every load case a member's analysis has: its own loads', its self weight's and those of the reactions it carries. */

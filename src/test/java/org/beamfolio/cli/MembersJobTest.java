@@ -163,6 +163,20 @@ class MembersJobTest {
     }
 
     @Test
+    void aSharedKeyInsideAMemberIsBadInputThatSaysWhereItBelongs() {
+        JobReading reading = read(HEADER + """
+                members:
+                  - id: A
+                    beam: { length: 10 ft, section: s, material: m, supports: [ { at: 0 ft, type: pin }, { at: 10 ft, type: roller } ] }
+                    loads: [ { type: area, load: floor, width: 4 ft } ]
+                    materials: { n: { E: 29000 ksi } }
+                """);
+        Diagnostic d = only(reading);
+        assertEquals("members[0].materials", d.keyPath());
+        assertTrue(d.message().startsWith("\"materials\" is shared by every member: write it at the top of the file"), d.message());
+    }
+
+    @Test
     void aReactionLoadInASingleBeamJobIsBadInput() {
         JobReading reading = read(HEADER + """
                 beam: { length: 10 ft, section: s, material: m, supports: [ { at: 0 ft, type: pin }, { at: 10 ft, type: roller } ] }
