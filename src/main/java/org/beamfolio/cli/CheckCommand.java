@@ -15,6 +15,10 @@ final class CheckCommand implements Callable<Integer> {
     @CommandLine.Mixin
     JobFiles jobs;
 
+    @CommandLine.Option(names = "--candidates", description = "for a job that leaves a section to choose (choose:), print"
+            + " every candidate tried with its weight, governing check and ratio instead of the summary")
+    boolean candidates;
+
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
 
@@ -32,7 +36,7 @@ final class CheckCommand implements Callable<Integer> {
             Pipeline.Solved solved = pipeline.solve(file);
             solved.messages().forEach(stderr::print);
             if (solved.status() == Main.OK) {
-                stdout.print(solved.summary());
+                stdout.print(candidates ? CandidatesTable.of(solved) : solved.summary());
             }
             status.add(solved.statusWithChecks());
         }

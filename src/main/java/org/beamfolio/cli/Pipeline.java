@@ -133,7 +133,7 @@ final class Pipeline {
             return MemberSolver.solve(reading);
         }
         try {
-            AnalysisResult result = Analysis.run(reading.job());
+            AnalysisResult result = Analysis.run(org.beamfolio.selection.Selection.resolve(reading.job()));
             return new Solved(result, Checks.run(result), List.of(), Main.OK);
         } catch (UnstableBeamException e) {
             Instability i = e.instability();

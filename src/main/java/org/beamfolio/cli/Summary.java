@@ -23,6 +23,10 @@ final class Summary {
         out.append("  length ").append(len(r.job().beam().length(), u)).append("; ");
         List<String> spans = r.spans().stream().map(s -> s.label() + " " + len(s.to() - s.from(), u)).toList();
         out.append(String.join(", ", spans)).append('\n');
+        r.job().sections().values().stream().filter(s -> s.choice() != null && !s.choice().tried().isEmpty()).forEach(s ->
+                out.append("  section ").append(s.id()).append(" chosen: ").append(s.designation())
+                        .append(s.choice().passing() ? ", the lightest that passes every check" : ", the best of candidates that all FAIL")
+                        .append(" (").append(s.choice().tried().size()).append(" tried; check --candidates lists them)\n"));
         out.append("  ").append(r.combinations().size()).append(" combinations from ").append(r.combinationSource()).append('\n');
         List<Support> supports = r.job().beam().supports();
         List<ReactionEnvelope.AtSupport> reactions = r.reactions().supports();

@@ -228,6 +228,11 @@ public final class JobReader {
             }
             SteelDesign steel = SteelDesignReader.read(context, design, combos == null ? null : combos.setName(), beam,
                     materials, sections, sectionsNode, materialsNode);
+            if (beam != null) {
+                ChoiceReader.requireFit(context, beam, materials, sections, sectionsNode, steel != null || timber != null
+                        || (design != null && (design.has("steel") || design.has("timber")))
+                        || (combos != null && (combos.stressCheck() || !combos.deflection().isEmpty())));
+            }
             if (design != null) {
                 design.rejectUnknown(DesignReader.DESIGN_KEYS);
             }

@@ -13,7 +13,7 @@ import org.beamfolio.units.Dimension;
 /** Reads the sections and rejects shapes that cannot be built (a flange deeper than the section). */
 final class SectionReader {
     /** The keys of one section: a designation from the catalogue, or a shape and its dimensions: the reader rejects any other, and the JSON Schema is tested against them. */
-    static final Set<String> SECTION_KEYS = Set.of("designation", "lumber", "plies", "shape", "flip", "b", "h", "d", "t", "bf", "tf", "tw", "plates", "I", "depth", "y_bottom", "A", "Q");
+    static final Set<String> SECTION_KEYS = Set.of("choose", "designation", "lumber", "plies", "shape", "flip", "b", "h", "d", "t", "bf", "tf", "tw", "plates", "I", "depth", "y_bottom", "A", "Q");
 
     /** The keys of one plate of a plates section: the reader rejects any other, and the JSON Schema is tested against them. */
     static final Set<String> PLATE_KEYS = Set.of("b", "h", "y");
@@ -48,6 +48,12 @@ final class SectionReader {
         ReadContext.Fields f = context.fields(node, path);
         if (f == null) {
             return null;
+        }
+        if (f.has("choose")) {
+            // the candidates take the place of a designation, shape or size: every other key is refused
+            Section chosen = ChoiceReader.read(context, id, f.optional("choose"), f.path("choose"));
+            f.rejectUnknown(SECTION_KEYS);
+            return chosen;
         }
         if (f.has("lumber")) {
             Section lumber = lumber(context, f, id);

@@ -102,7 +102,7 @@ final class SteelDesignReader {
             if (section == null || material == null) {
                 continue;
             }
-            if (!(section.shape() instanceof SectionShape.Catalogued catalogued)) {
+            if (!(section.shape() instanceof SectionShape.Catalogued)) {
                 c.error(at(sectionsNode, pair[0], steelNode), "sections." + pair[0], "design.steel designs catalogue shapes"
                         + " (designation:); this " + shapeName(section.shape()) + " section is out of scope of the steel"
                         + " design (built-up plate girders, F4 and F5, are not implemented): name a catalogue shape or"
@@ -124,17 +124,36 @@ final class SteelDesignReader {
                 ok = false;
                 continue;
             }
+            ok &= inScope(c, at(sectionsNode, pair[0], steelNode), pair, section, material, edition, at(materialsNode, pair[1], steelNode));
+        }
+        return ok;
+    }
+
+    /**
+     * Whether the section's shape (every listed candidate of a section to be chosen) is inside the
+     * chapters implemented. A family's shapes outside them are left out by the search instead, so
+     * a family is not refused for a shape the engineer did not name.
+     */
+    private static boolean inScope(ReadContext c, YamlNode sectionAt, String[] pair, Section section, Material material,
+                                   Edition edition, YamlNode materialAt) {
+        List<Section> shapes = section.choice() == null ? List.of(section)
+                : section.choice().kind() == org.beamfolio.model.SectionChoice.Kind.LISTED ? section.choice().candidates() : List.of();
+        boolean ok = true;
+        for (Section s : shapes) {
+            if (!(s.shape() instanceof SectionShape.Catalogued catalogued)) {
+                continue;
+            }
             try {
                 SteelMember m = SteelMember.of(catalogued.shape(), material, edition);
                 var outside = Flexure.outOfScope(m);
                 if (outside.isPresent()) {
-                    c.error(at(sectionsNode, pair[0], steelNode), "sections." + pair[0], "out of scope of the steel design: "
-                            + outside.get());
+                    c.error(sectionAt, "sections." + pair[0], "out of scope of the steel design: "
+                            + (section.choice() == null ? "" : s.designation() + ": ") + outside.get());
                     ok = false;
                 }
             } catch (IllegalArgumentException e) {
-                c.error(at(materialsNode, pair[1], steelNode), "materials." + pair[1], e.getMessage());
-                ok = false;
+                c.error(materialAt, "materials." + pair[1], e.getMessage());
+                return false;
             }
         }
         return ok;
@@ -149,6 +168,9 @@ final class SteelDesignReader {
             Material material = materials.get(pair[1]);
             if (section == null || material == null || !(section.shape() instanceof SectionShape.Catalogued)) {
                 continue;
+            }
+            if (section.choice() != null && material.timber() != null) {
+                continue; // the choice's reader says that catalogue shapes are steel
             }
             boolean steel = material.grade() != null || material.yieldStress() != null
                     || Math.abs(material.elasticModulus() / STEEL_E - 1) <= STEEL_E_TOLERANCE;

@@ -107,7 +107,8 @@ final class TimberDesignReader {
         beam.segments().forEach(s -> sectionIds.add(s.section()));
         for (String id : sectionIds) {
             Section s = sections.get(id);
-            if (s != null && !(s.shape() instanceof SectionShape.Rectangle)) {
+            // a section to be chosen is refused by its own reader when its candidates are not lumber
+            if (s != null && s.choice() == null && !(s.shape() instanceof SectionShape.Rectangle)) {
                 c.error(at, path, "timber design needs a rectangular section, but section \"" + id + "\" is not one:"
                         + " use lumber: 2x10 (with plies) or shape: rectangle");
                 ok = false;

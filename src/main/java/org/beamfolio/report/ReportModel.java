@@ -10,7 +10,7 @@ import java.util.List;
 public record ReportModel(Sheet sheet, Cover cover, Revision revision, Basis basis, Loading loading, List<CombinationSheet> analyses,
                           Envelope envelope, Reactions reactions, Stresses stresses, Checks checks, List<String> cautions,
                           List<String> reviewChecklist, List<List<String>> history, Appendix appendix, AreaLoads areaLoads,
-                          SteelSheet steel, Timber timber) {
+                          SteelSheet steel, Timber timber, Selection selection) {
 
     /** The title block on every sheet. */
     public record Sheet(String title, String number, String subject, String revision, String preparedBy, String date,
@@ -92,6 +92,13 @@ public record ReportModel(Sheet sheet, Cover cover, Revision revision, Basis bas
      */
     public record Timber(List<String> basis, Table reference, String source, Table factors, List<Equation> fbPrime,
                          Table bending, Table shear, Table bearing, Table longTerm, String shearNote, String creep) {}
+
+    /**
+     * The selection sheet of a section the tool chose (null when every section is named): the
+     * candidates and the order they were tried in, each tried with its governing check, the outcome.
+     */
+    public record Selection(String title, String basis, String method, Table tried, String outcome, String notTried,
+                            boolean passing) {}
 
     public record Appendix(List<Row> lines, String digest, String toolVersion, String attachment) {}
 }

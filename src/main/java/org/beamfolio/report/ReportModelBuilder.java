@@ -65,7 +65,7 @@ final class ReportModelBuilder {
         ReportModel model = new ReportModel(sheet, cover(checks, analyses, revision != null, steel != null), revision, basis(),
                 loading.build(), analyses, envelope, new ReactionsPart(result, t).build(), stresses, checks(checks), cautions(),
                 reviewChecklist(), history(), appendix(), new TakeOffPart(job.takeOff(), job.report().units(), t).build(), steel,
-                new TimberPart(result, t).build());
+                new TimberPart(result, t).build(), new SelectionPart(job, t).build());
         return new Built(model, drawings);
     }
 
@@ -121,6 +121,9 @@ final class ReportModelBuilder {
         contents.add(new ReportModel.Row("Envelope over all combinations", "envelope"));
         contents.add(new ReportModel.Row("Reactions for the supporting structure", "reactions"));
         contents.add(new ReportModel.Row("Section properties and stresses", "stresses"));
+        if (SelectionPart.chosenSection(result.job()) != null) {
+            contents.add(new ReportModel.Row("Choosing section " + SelectionPart.chosenSection(result.job()).id(), "selection"));
+        }
         if (steel) {
             contents.add(new ReportModel.Row("Steel design", "steel"));
         }

@@ -108,7 +108,7 @@ public final class ResultsWriter {
         g.writeObjectFieldStart("sections");
         for (Map.Entry<String, SectionProperties> e : result.sections().entrySet()) {
             g.writeFieldName(e.getKey());
-            section(g, e.getValue(), u);
+            section(g, e.getValue(), u, result.job().sections().get(e.getKey()));
         }
         g.writeEndObject();
         g.writeArrayFieldStart("combinations");
@@ -231,7 +231,8 @@ public final class ResultsWriter {
         g.writeEndObject();
     }
 
-    private static void section(JsonGenerator g, SectionProperties p, ReportUnits u) throws IOException {
+    private static void section(JsonGenerator g, SectionProperties p, ReportUnits u, org.beamfolio.model.Section s)
+            throws IOException {
         g.writeStartObject();
         if (p.area() != null) {
             g.writeNumberField("A", u.area().fromSi(p.area()));
@@ -248,6 +249,9 @@ public final class ResultsWriter {
         }
         if (p.tNeutral() != null) {
             g.writeNumberField("t", u.sectionLength().fromSi(p.tNeutral()));
+        }
+        if (s != null) {
+            ChoiceResults.write(g, s, u);
         }
         g.writeEndObject();
     }

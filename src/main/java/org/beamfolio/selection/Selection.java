@@ -1,0 +1,135 @@
+package org.beamfolio.selection;
+
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import org.beamfolio.analysis.Analysis;
+import org.beamfolio.analysis.AnalysisResult;
+import org.beamfolio.analysis.UnstableBeamException;
+import org.beamfolio.catalogue.ShapeProperty;
+import org.beamfolio.checks.CheckOutcome;
+import org.beamfolio.checks.Checks;
+import org.beamfolio.checks.timber.TimberInputException;
+import org.beamfolio.design.steel.OutOfScopeException;
+import org.beamfolio.model.Job;
+import org.beamfolio.model.Material;
+import org.beamfolio.model.Section;
+import org.beamfolio.model.SectionChoice;
+import org.beamfolio.model.SectionShape;
+
+/**
+ * The selection stage's entry point: chooses the section a job leaves to the tool
+ * ({@code choose:}). Candidates are tried in the order the reader gives them, lightest first;
+ * each is put in the job, the job is analysed and every check it asks for is run, exactly as if
+ * the engineer had named that section (its own self weight included), and the first that passes
+ * every check is chosen. When none passes, the candidate with the lowest governing ratio is
+ * used, so the package can be written and show by how much it misses.
+ *
+ * <p>The search works on one member's job, so a project of several members can apply it to each.
+ */
+public final class Selection {
+    private Selection() {}
+
+    /**
+     * The job with its section to be chosen replaced by the candidate chosen, which carries the
+     * candidates tried; the job itself when it leaves no section to the tool.
+     *
+     * @throws UnstableBeamException when the beam cannot be solved (whatever the section)
+     * @throws TimberInputException when no candidate can be checked (e.g. every one too slender for the NDS)
+     */
+    public static Job resolve(Job job) throws UnstableBeamException {
+        Section open = sectionToChoose(job);
+        if (open == null) {
+            return job;
+        }
+        List<SectionChoice.Trial> tried = new ArrayList<>();
+        TimberInputException firstRefusal = null;
+        for (Section candidate : open.choice().candidates()) {
+            Trial trial = trial(job, open, candidate);
+            if (trial.refusal() != null && firstRefusal == null) {
+                firstRefusal = trial.refusal();
+            }
+            tried.add(trial.entry());
+            if (trial.entry().pass()) {
+                break;
+            }
+        }
+        SectionChoice searched = open.choice().withTried(tried);
+        SectionChoice.Trial chosen = searched.chosen();
+        if (chosen == null) {
+            throw firstRefusal;
+        }
+        return Jobs.withSection(job, open.chosenAs(chosen.section(), searched));
+    }
+
+    /** The section of the beam left to the tool (the reader allows one a beam), or null. */
+    static Section sectionToChoose(Job job) {
+        List<String> used = new ArrayList<>();
+        used.add(job.beam().section());
+        job.beam().segments().forEach(s -> used.add(s.section()));
+        for (String id : used) {
+            Section s = job.sections().get(id);
+            if (s != null && s.choice() != null && s.choice().tried().isEmpty()) {
+                return s;
+            }
+        }
+        return null;
+    }
+
+    /** One candidate's entry, and the refusal that kept it from being checked (or null). */
+    private record Trial(SectionChoice.Trial entry, TimberInputException refusal) {}
+
+    private static Trial trial(Job job, Section open, Section candidate) throws UnstableBeamException {
+        Section asNamed = new Section(open.id(), candidate.shape(), candidate.flip(), candidate.lumber());
+        Job named = Jobs.withSection(job, asNamed);
+        double weight = weight(job, open.id(), candidate);
+        double area = area(candidate);
+        try {
+            AnalysisResult result = Analysis.run(named);
+            List<CheckOutcome> outcomes = Checks.run(result);
+            CheckOutcome governing = outcomes.stream().max(Comparator.comparingDouble(CheckOutcome::ratio)).orElse(null);
+            boolean pass = outcomes.stream().allMatch(CheckOutcome::pass);
+            if (governing == null) {
+                return new Trial(new SectionChoice.Trial(candidate, weight, area, "none", "no check", Double.NaN, pass), null);
+            }
+            return new Trial(new SectionChoice.Trial(candidate, weight, area, governing.id(), governing.description(),
+                    governing.ratio(), pass), null);
+        } catch (TimberInputException e) {
+            return new Trial(new SectionChoice.Trial(candidate, weight, area, "not checked", e.getMessage(), Double.NaN, false), e);
+        } catch (OutOfScopeException e) {
+            return new Trial(new SectionChoice.Trial(candidate, weight, area, "out of scope", e.getMessage(), Double.NaN, false), null);
+        }
+    }
+
+    /** Weight per length, N/m: the catalogue's W, or density x A of the material the section is used with (NaN without a density). */
+    static double weight(Job job, String sectionId, Section candidate) {
+        if (candidate.shape() instanceof SectionShape.Catalogued c) {
+            return c.shape().get(ShapeProperty.W);
+        }
+        String materialId = job.beam().section().equals(sectionId) ? job.beam().material()
+                : job.beam().segments().stream().filter(s -> s.section().equals(sectionId)).map(s -> s.material())
+                        .findFirst().orElse(job.beam().material());
+        Material m = job.materials().get(materialId);
+        return m == null || m.weightDensity() == null ? Double.NaN : m.weightDensity() * area(candidate);
+    }
+
+    /** Cross-section area, m^2 (the catalogue's A, or b x h of lumber). */
+    static double area(Section candidate) {
+        if (candidate.shape() instanceof SectionShape.Catalogued c) {
+            return c.shape().get(ShapeProperty.A);
+        }
+        if (candidate.shape() instanceof SectionShape.Rectangle r) {
+            return r.b() * r.h();
+        }
+        return Double.NaN;
+    }
+
+    /** Every section of the job by id, for building a job with one replaced. */
+    static Map<String, Section> sections(Job job, Section replacement) {
+        Map<String, Section> sections = new LinkedHashMap<>(job.sections());
+        sections.put(replacement.id(), replacement);
+        return sections;
+    }
+}
