@@ -102,6 +102,9 @@ final class SteelDesignReader {
             if (section == null || material == null) {
                 continue;
             }
+            if (section.choice() != null && section.choice().kind() == org.beamfolio.model.SectionChoice.Kind.LUMBER) {
+                continue; // the choice's reader says that lumber is timber
+            }
             if (!(section.shape() instanceof SectionShape.Catalogued)) {
                 c.error(at(sectionsNode, pair[0], steelNode), "sections." + pair[0], "design.steel designs catalogue shapes"
                         + " (designation:); this " + shapeName(section.shape()) + " section is out of scope of the steel"

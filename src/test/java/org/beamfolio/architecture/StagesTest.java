@@ -39,12 +39,13 @@ class StagesTest {
             Map.entry("design", Set.of("units", "catalogue", "model", "section", "analysis")),
             Map.entry("derivation", Set.of("units", "catalogue", "model", "section", "analysis")),
             Map.entry("checks", Set.of("units", "catalogue", "model", "section", "combinations", "analysis", "design")),
+            Map.entry("selection", Set.of("units", "catalogue", "model", "section", "combinations", "analysis", "design", "checks")),
             Map.entry("results", Set.of("units", "catalogue", "model", "section", "analysis", "design", "derivation", "checks")),
             Map.entry("report", Set.of("units", "catalogue", "model", "section", "combinations", "loads", "analysis", "design",
                     "derivation", "checks", "results")),
             Map.entry("seal", Set.of("units", "model", "checks")),
             Map.entry("cli", Set.of("units", "catalogue", "model", "section", "combinations", "loads", "job", "analysis", "design",
-                    "derivation", "checks", "results", "report", "seal")));
+                    "derivation", "checks", "selection", "results", "report", "seal")));
 
     @Test
     void noStageReachesUpward() throws IOException {
