@@ -44,7 +44,7 @@ class GoldenXhtmlTest {
         Path job = Path.of("example-jobs", name + ".yaml");
         assertTrue(Files.exists(job), "a golden file needs its example job: " + job);
         var reading = JobReader.read(job);
-        AnalysisResult result = Analysis.run(reading.job());
+        AnalysisResult result = Analysis.run(org.beamfolio.selection.Selection.resolve(reading.job()));
         String xhtml = new PackageRenderer().xhtml(result, Checks.run(result));
         Path golden = GOLDEN.resolve(name + ".xhtml");
         String expected = Files.exists(golden) ? Files.readString(golden) : "";
