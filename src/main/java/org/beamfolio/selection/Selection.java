@@ -46,14 +46,20 @@ public final class Selection {
         }
         List<SectionChoice.Trial> tried = new ArrayList<>();
         TimberInputException firstRefusal = null;
-        for (Section candidate : open.choice().candidates()) {
-            Trial trial = trial(job, open, candidate);
-            if (trial.refusal() != null && firstRefusal == null) {
-                firstRefusal = trial.refusal();
-            }
-            tried.add(trial.entry());
-            if (trial.entry().pass()) {
-                break;
+        List<Section> candidates = open.choice().candidates();
+        int window = Math.max(1, Runtime.getRuntime().availableProcessors());
+        search:
+        for (int from = 0; from < candidates.size(); from += window) {
+            // the next few candidates are tried side by side; the results are read in order, and those
+            // after the first that passes are dropped, so the outcome is the same as one by one
+            for (Trial trial : trials(job, open, candidates.subList(from, Math.min(from + window, candidates.size())))) {
+                if (trial.refusal() != null && firstRefusal == null) {
+                    firstRefusal = trial.refusal();
+                }
+                tried.add(trial.entry());
+                if (trial.entry().pass()) {
+                    break search;
+                }
             }
         }
         SectionChoice searched = open.choice().withTried(tried);
@@ -76,6 +82,35 @@ public final class Selection {
             }
         }
         return null;
+    }
+
+    /** Each candidate's trial, in order; worked in parallel, as each is independent of the others. */
+    private static List<Trial> trials(Job job, Section open, List<Section> candidates) throws UnstableBeamException {
+        if (candidates.size() == 1) {
+            return List.of(trial(job, open, candidates.get(0)));
+        }
+        try {
+            return candidates.parallelStream().map(c -> {
+                try {
+                    return trial(job, open, c);
+                } catch (UnstableBeamException e) {
+                    throw new Unstable(e);
+                }
+            }).toList();
+        } catch (Unstable e) {
+            throw e.cause;
+        }
+    }
+
+    /** Carries a beam's instability out of a parallel stream. */
+    private static final class Unstable extends RuntimeException {
+        private static final long serialVersionUID = 1L;
+        private final transient UnstableBeamException cause;
+
+        Unstable(UnstableBeamException cause) {
+            super(cause);
+            this.cause = cause;
+        }
     }
 
     /** One candidate's entry, and the refusal that kept it from being checked (or null). */
