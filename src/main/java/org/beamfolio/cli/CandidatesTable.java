@@ -39,7 +39,7 @@ final class CandidatesTable {
         List<String[]> rows = new ArrayList<>();
         for (int i = 0; i < choice.tried().size(); i++) {
             SectionChoice.Trial t = choice.tried().get(i);
-            rows.add(new String[] {Integer.toString(i + 1), (t == chosen ? "* " : "  ") + name(t.section()),
+            rows.add(new String[] {Integer.toString(i + 1), (t == chosen ? "* " : "  ") + name(t.section(), u),
                     Double.isNaN(t.weight()) ? "-" : Numbers.format(u.distributed().fromSi(t.weight())),
                     Numbers.format(u.area().fromSi(t.area())), t.governing(),
                     Double.isNaN(t.ratio()) ? "-" : Numbers.format(t.ratio()), t.pass() ? "passes" : "FAILS"});
@@ -50,16 +50,23 @@ final class CandidatesTable {
                 "governing check", "ratio", "result"), rows).indent(2));
         int notTried = choice.candidates().size() - choice.tried().size();
         if (chosen.pass()) {
-            out.append("  chosen: ").append(name(chosen.section())).append(", the lightest that passes every check");
+            out.append("  chosen: ").append(name(chosen.section(), u)).append(", the lightest that passes every check");
         } else {
-            out.append("  NO CANDIDATE PASSES: the lowest governing ratio is ").append(name(chosen.section())).append("'s, ")
+            out.append("  NO CANDIDATE PASSES: the lowest governing ratio is ").append(name(chosen.section(), u)).append("'s, ")
                     .append(Numbers.format(chosen.ratio())).append(" (").append(chosen.governing()).append(")");
         }
         out.append(notTried > 0 ? "; " + notTried + " heavier not tried\n" : "\n");
         return out.toString();
     }
 
-    private static String name(Section s) {
-        return s.lumber() != null ? s.lumber().designation() : s.designation();
+    static String name(Section s, ReportUnits u) {
+        if (s.lumber() != null) {
+            return s.lumber().designation();
+        }
+        if (s.shape() instanceof org.beamfolio.model.SectionShape.Rectangle r) {
+            return Numbers.format(u.sectionLength().fromSi(r.b())) + "x" + Numbers.format(u.sectionLength().fromSi(r.h()))
+                    + " " + u.sectionLength().symbol();
+        }
+        return s.designation();
     }
 }

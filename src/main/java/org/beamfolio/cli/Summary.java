@@ -24,7 +24,7 @@ final class Summary {
         List<String> spans = r.spans().stream().map(s -> s.label() + " " + len(s.to() - s.from(), u)).toList();
         out.append(String.join(", ", spans)).append('\n');
         r.job().sections().values().stream().filter(s -> s.choice() != null && !s.choice().tried().isEmpty()).forEach(s ->
-                out.append("  section ").append(s.id()).append(" chosen: ").append(s.designation())
+                out.append("  section ").append(s.id()).append(" chosen: ").append(CandidatesTable.name(s, u))
                         .append(s.choice().passing() ? ", the lightest that passes every check" : ", the best of candidates that all FAIL")
                         .append(" (").append(s.choice().tried().size()).append(" tried; check --candidates lists them)\n"));
         out.append("  ").append(r.combinations().size()).append(" combinations from ").append(r.combinationSource()).append('\n');

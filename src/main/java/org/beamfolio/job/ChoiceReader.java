@@ -34,6 +34,12 @@ final class ChoiceReader {
     /** The keys of {@code choose: { lumber: ... }}; the JSON Schema is tested against them. */
     static final Set<String> LUMBER_KEYS = Set.of("lumber", "plies");
 
+    /** The keys of {@code choose: { widths: ... }} (glulam); the JSON Schema is tested against them. */
+    static final Set<String> GLULAM_KEYS = Set.of("widths", "depth_min", "depth_max", "lamination");
+
+    /** Glulam candidates offered at most, so a mistyped lamination cannot ask for thousands. */
+    private static final int MOST_GLULAM = 400;
+
     /** The families as a job file names them; HSS alone is the rectangular (and square) HSS. */
     private static final Map<String, ShapeFamily> FAMILIES = familyNames();
 
@@ -74,8 +80,13 @@ final class ChoiceReader {
             f.rejectUnknown(LUMBER_KEYS);
             return section;
         }
-        c.error(node, path, "choose needs a family (family: W) or lumber sizes (lumber: [ 2x8, 2x10 ]); or give a list of"
-                + " designations");
+        if (f.node().entries().containsKey("widths")) {
+            Section section = glulam(c, id, f);
+            f.rejectUnknown(GLULAM_KEYS);
+            return section;
+        }
+        c.error(node, path, "choose needs a family (family: W), lumber sizes (lumber: [ 2x8, 2x10 ]) or glulam widths"
+                + " (widths: [ 5-1/8 in ], depth_min, depth_max, lamination); or give a list of designations");
         return null;
     }
 
@@ -269,6 +280,64 @@ final class ChoiceReader {
         return first(id, new SectionChoice(SectionChoice.Kind.LUMBER, basis, sections, List.of()));
     }
 
+    /**
+     * Glulam: each width given, in every depth of whole laminations from depth_min to depth_max
+     * ({@code lamination} thick, 1-1/2 in by default, the usual western species lamination; common
+     * practice), as rectangles.
+     */
+    private static Section glulam(ReadContext c, String id, ReadContext.Fields f) {
+        YamlNode widthsNode = f.optional("widths");
+        List<YamlNode> items = c.list(widthsNode, f.path("widths")).orElse(null);
+        YamlNode minNode = f.required("depth_min");
+        YamlNode maxNode = f.required("depth_max");
+        Double depthMin = minNode == null ? null : c.positive(minNode, f.path("depth_min"), Dimension.LENGTH);
+        Double depthMax = maxNode == null ? null : c.positive(maxNode, f.path("depth_max"), Dimension.LENGTH);
+        Double lamination = f.has("lamination") ? c.positive(f.optional("lamination"), f.path("lamination"), Dimension.LENGTH)
+                : Double.valueOf(1.5 * INCH);
+        if (items == null || depthMin == null || depthMax == null || lamination == null) {
+            return null;
+        }
+        if (items.isEmpty()) {
+            c.error(widthsNode, f.path("widths"), "the list of widths is empty: give at least one, e.g. [ 5-1/8 in ]");
+            return null;
+        }
+        List<Double> widths = new ArrayList<>();
+        for (int i = 0; i < items.size(); i++) {
+            Double w = c.positive(items.get(i), f.path("widths") + "[" + i + "]", Dimension.LENGTH);
+            if (w == null) {
+                return null;
+            }
+            widths.add(w);
+        }
+        long first = (long) Math.ceil(depthMin / lamination - 1e-9);
+        long last = (long) Math.floor(depthMax / lamination + 1e-9);
+        if (last < first) {
+            c.error(f.node(), f.path(), "no depth of whole laminations lies between depth_min and depth_max (laminations "
+                    + written(f, "lamination", "1-1/2 in") + " thick): widen the range");
+            return null;
+        }
+        if ((last - first + 1) * widths.size() > MOST_GLULAM) {
+            c.error(f.node(), f.path(), "that is " + (last - first + 1) * widths.size() + " glulam sizes, more than "
+                    + MOST_GLULAM + ": narrow the depths or check the lamination thickness");
+            return null;
+        }
+        List<SectionShape.Rectangle> sizes = new ArrayList<>();
+        for (double b : widths) {
+            for (long n = first; n <= last; n++) {
+                sizes.add(new SectionShape.Rectangle(b, n * lamination));
+            }
+        }
+        sizes.sort(Comparator.<SectionShape.Rectangle>comparingDouble(r -> r.b() * r.h()).thenComparingDouble(SectionShape.Rectangle::h));
+        String basis = "glulam " + written(f, "widths") + " wide, " + written(f, "depth_min") + " to " + written(f, "depth_max")
+                + " deep in laminations of " + written(f, "lamination", "1-1/2 in") + " (" + sizes.size() + " sizes)";
+        List<Section> candidates = sizes.stream().map(r -> new Section(id, r, false)).toList();
+        return first(id, new SectionChoice(SectionChoice.Kind.GLULAM, basis, candidates, List.of()));
+    }
+
+    private static String written(ReadContext.Fields f, String key, String otherwise) {
+        return f.node().entries().containsKey(key) ? written(f, key) : otherwise;
+    }
+
     private static List<Integer> plies(ReadContext c, ReadContext.Fields f) {
         YamlNode node = f.optional("plies");
         if (node == null) {
@@ -345,11 +414,16 @@ final class ChoiceReader {
             if (material == null || !reported.add(pair[0] + "/" + pair[1])) {
                 continue;
             }
-            boolean lumber = section.choice().kind() == SectionChoice.Kind.LUMBER;
-            if (lumber && material.timber() == null) {
+            SectionChoice.Kind kind = section.choice().kind();
+            boolean lumber = kind == SectionChoice.Kind.LUMBER;
+            if (kind == SectionChoice.Kind.GLULAM && (material.timber() == null
+                    || material.timber().kind() != org.beamfolio.model.timber.TimberKind.GLULAM)) {
+                c.error(at, path, "glulam sizes need a glulam material, but material \"" + pair[1] + "\" is not one (give it"
+                        + " timber: glulam and its reference design values)");
+            } else if (lumber && material.timber() == null) {
                 c.error(at, path, "lumber sizes are timber, but material \"" + pair[1] + "\" is not a timber material (give it"
                         + " timber: sawn and its reference design values), or choose catalogue shapes for a steel beam");
-            } else if (!lumber && material.timber() != null) {
+            } else if (!kind.timber() && material.timber() != null) {
                 c.error(at, path, "catalogue shapes are steel, but material \"" + pair[1] + "\" is timber: choose lumber"
                         + " sizes (choose: { lumber: [ 2x10, 2x12 ] }) or use a steel material (grade: A992)");
             }

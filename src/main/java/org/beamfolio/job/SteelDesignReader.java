@@ -102,8 +102,8 @@ final class SteelDesignReader {
             if (section == null || material == null) {
                 continue;
             }
-            if (section.choice() != null && section.choice().kind() == org.beamfolio.model.SectionChoice.Kind.LUMBER) {
-                continue; // the choice's reader says that lumber is timber
+            if (section.choice() != null && section.choice().kind().timber()) {
+                continue; // the choice's reader says that lumber and glulam are timber
             }
             if (!(section.shape() instanceof SectionShape.Catalogued)) {
                 c.error(at(sectionsNode, pair[0], steelNode), "sections." + pair[0], "design.steel designs catalogue shapes"

@@ -14,8 +14,17 @@ import java.util.List;
  * @param tried the candidates tried, in order; empty before the search
  */
 public record SectionChoice(Kind kind, String basis, List<Section> candidates, List<Trial> tried) {
-    /** A list of catalogue designations, a catalogue family with filters, or lumber sizes and plies. */
-    public enum Kind { LISTED, FAMILY, LUMBER }
+    /**
+     * A list of catalogue designations, a catalogue family with filters, lumber sizes and plies, or
+     * glulam widths and depths in whole laminations.
+     */
+    public enum Kind { LISTED, FAMILY, LUMBER, GLULAM;
+
+        /** Whether the candidates are timber (chosen by area) rather than steel shapes (chosen by weight). */
+        public boolean timber() {
+            return this == LUMBER || this == GLULAM;
+        }
+    }
 
     /**
      * One candidate tried: the whole job analysed and checked with it.

@@ -36,7 +36,7 @@ final class SelectionPart {
         }
         SectionChoice choice = section.choice();
         SectionChoice.Trial chosen = choice.chosen();
-        boolean lumber = choice.kind() == SectionChoice.Kind.LUMBER;
+        boolean lumber = choice.kind().timber();
         boolean weights = choice.tried().stream().noneMatch(tr -> Double.isNaN(tr.weight()));
         List<String> header = new ArrayList<>(List.of("Tried", lumber ? "Size" : "Shape"));
         if (weights) {
@@ -48,7 +48,7 @@ final class SelectionPart {
         List<Boolean> failing = new ArrayList<>();
         for (int i = 0; i < choice.tried().size(); i++) {
             SectionChoice.Trial tr = choice.tried().get(i);
-            List<String> row = new ArrayList<>(List.of(Integer.toString(i + 1), name(tr)));
+            List<String> row = new ArrayList<>(List.of(Integer.toString(i + 1), name(tr, t)));
             if (weights) {
                 row.add(t.plain(tr.weight(), t.units().distributed()));
             }
@@ -76,25 +76,33 @@ final class SelectionPart {
     private String outcome(SectionChoice choice, SectionChoice.Trial chosen) {
         if (!chosen.pass()) {
             double miss = (chosen.ratio() - 1) * 100;
-            return "No candidate passes every check. The package uses " + name(chosen) + ", the candidate with the lowest"
+            return "No candidate passes every check. The package uses " + name(chosen, t) + ", the candidate with the lowest"
                     + " governing ratio: " + chosen.governing() + " at a ratio of " + Numbers.format(chosen.ratio())
                     + ", which misses its limit by " + Numbers.format(miss) + " %. The member is marked as failing: choose"
                     + " from heavier candidates, or change the bracing, spans or loads.";
         }
-        String text = name(chosen) + " is chosen: the lightest candidate that passes every check (governing: "
+        String text = name(chosen, t) + " is chosen: the lightest candidate that passes every check (governing: "
                 + chosen.governing() + ", ratio " + Numbers.format(chosen.ratio()) + ").";
         int at = choice.tried().indexOf(chosen);
         if (at > 0) {
             SectionChoice.Trial lighter = choice.tried().get(at - 1);
-            text += " The next lighter candidate, " + name(lighter) + ", fails: " + (Double.isNaN(lighter.ratio())
+            text += " The next " + (choice.kind().timber() ? "smaller" : "lighter") + " candidate, " + name(lighter, t) + ", fails: " + (Double.isNaN(lighter.ratio())
                     ? lighter.governing() + " (" + lighter.description() + ")"
                     : lighter.governing() + " at a ratio of " + Numbers.format(lighter.ratio())) + ".";
         }
         return text;
     }
 
-    private static String name(SectionChoice.Trial tr) {
+    /** A candidate as the sheet names it: designation, lumber size, or a glulam's width x depth. */
+    static String name(SectionChoice.Trial tr, Texts t) {
         Section s = tr.section();
-        return s.lumber() != null ? s.lumber().toString() : s.designation();
+        if (s.lumber() != null) {
+            return s.lumber().toString();
+        }
+        if (s.shape() instanceof org.beamfolio.model.SectionShape.Rectangle r) {
+            return t.plain(r.b(), t.units().sectionLength()) + " x " + t.plain(r.h(), t.units().sectionLength()) + " "
+                    + Texts.symbol(t.units().sectionLength());
+        }
+        return s.designation();
     }
 }

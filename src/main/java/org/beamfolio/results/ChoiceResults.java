@@ -20,14 +20,14 @@ final class ChoiceResults {
         if (choice == null || choice.tried().isEmpty()) {
             return;
         }
-        name(g, section);
+        name(g, section, u);
         g.writeBooleanField("chosen_passes", choice.passing());
         g.writeStringField("choice_basis", choice.basis());
         SectionChoice.Trial chosen = choice.chosen();
         g.writeArrayFieldStart("candidates");
         for (SectionChoice.Trial t : choice.tried()) {
             g.writeStartObject();
-            name(g, t.section());
+            name(g, t.section(), u);
             number(g, "weight", Double.isNaN(t.weight()) ? Double.NaN : u.distributed().fromSi(t.weight()));
             number(g, "A", u.area().fromSi(t.area()));
             g.writeStringField("check", t.governing());
@@ -39,8 +39,12 @@ final class ChoiceResults {
         g.writeEndArray();
     }
 
-    private static void name(JsonGenerator g, Section s) throws IOException {
-        if (s.lumber() != null) {
+    private static void name(JsonGenerator g, Section s, ReportUnits u) throws IOException {
+        if (s.lumber() == null && s.shape() instanceof org.beamfolio.model.SectionShape.Rectangle r) {
+            // a glulam size: its width and depth in the section units
+            g.writeNumberField("b", u.sectionLength().fromSi(r.b()));
+            g.writeNumberField("d", u.sectionLength().fromSi(r.h()));
+        } else if (s.lumber() != null) {
             g.writeStringField("lumber", s.lumber().nominalThickness() + "x" + s.lumber().nominalDepth());
             g.writeNumberField("plies", s.lumber().plies());
         } else {

@@ -46,6 +46,7 @@ class SchemaKeysTest {
                 Arguments.of("sections.<id>.plates[]", "/definitions/section/oneOf/*/properties/plates/items", SectionReader.PLATE_KEYS),
                 Arguments.of("sections.<id>.choose (family)", "/definitions/section/oneOf/*/properties/choose/oneOf/1", ChoiceReader.FAMILY_KEYS),
                 Arguments.of("sections.<id>.choose (lumber)", "/definitions/section/oneOf/*/properties/choose/oneOf/2", ChoiceReader.LUMBER_KEYS),
+                Arguments.of("sections.<id>.choose (glulam)", "/definitions/section/oneOf/*/properties/choose/oneOf/3", ChoiceReader.GLULAM_KEYS),
                 Arguments.of("loads[]", "/definitions/load", LoadReader.LOAD_KEYS),
                 Arguments.of("members[]", "/properties/members/items", MembersReader.MEMBER_KEYS),
                 Arguments.of("combinations[]", "/properties/combinations/oneOf/1/items", CombinationReader.COMBINATION_KEYS),

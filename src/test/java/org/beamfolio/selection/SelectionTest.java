@@ -181,6 +181,53 @@ class SelectionTest {
         assertEquals(1.5 * 11.25 * 0.0254 * 0.0254, s2x12.area(), 1e-15);
     }
 
+    /**
+     * A 20 ft simple span of 24F-V4 glulam (Fb 2,400 psi, NDS Supplement Table 5A, as typed in the
+     * job), 5-1/8 in wide, depths of 1-1/2 in laminations from 9 to 12 in; top edge braced (CL =
+     * 1.0); CV = (21/20)^0.1 (12/d)^0.1 (5.125/5.125)^0.1 is above 1.0 for d of 12 in or less, so
+     * 1.0 (NDS 5.3.6); no self weight. D + L = 100 + 340 = 440 plf, CD = 1.0, M = 440 (20)^2 / 8 =
+     * 22,000 lb*ft = 264,000 lb*in (by hand). S = 5.125 d^2 / 6: 69.19, 94.17 and 123.0 in^3.
+     */
+    @Test
+    void theShallowestGlulamThatPassesIsChosenAndTheNextShallowerFailsInBending() throws Exception {
+        String text = """
+                beamfolio: 1
+                project: { title: Test glulam beam, number: T-45 }
+                report: { units: US }
+                materials:
+                  gl: { timber: glulam, Fb: 2400 psi, Fv: 265 psi, Fc_perp: 650 psi, E: 1800 ksi, Emin: 950 ksi }
+                sections:
+                  g1: { choose: { widths: [ 5-1/8 in ], depth_min: 9 in, depth_max: 12 in } }
+                beam:
+                  length: 20 ft
+                  section: g1
+                  material: gl
+                  bracing: { top: continuous }
+                  supports:
+                    - { at: 0 ft, type: pin }
+                    - { at: 20 ft, type: roller }
+                loads:
+                  - { case: D, type: uniform, w: 100 lb/ft }
+                  - { case: L, type: uniform, w: 340 lb/ft }
+                combinations: ASCE7-ASD
+                design: { timber: NDS-2018 }
+                """;
+        Job job = resolve(text);
+        SectionChoice choice = choiceOf(job);
+        assertEquals(3, choice.tried().size());
+        double inch = 0.0254;
+        assertEquals(12 * inch, ((org.beamfolio.model.SectionShape.Rectangle) job.sections().get("g1").shape()).h(), 1e-12);
+        // 10-1/2 in fails in bending: 264,000 / 94.17 = 2,803 psi against 2,400 psi, ratio 1.168
+        SectionChoice.Trial d105 = choice.tried().get(1);
+        assertFalse(d105.pass());
+        assertEquals("nds-bending", d105.governing());
+        assertEquals(264_000 / (5.125 * 10.5 * 10.5 / 6) / 2400, d105.ratio(), 1e-9);
+        // 12 in passes: 264,000 / 123.0 = 2,146 psi, ratio 0.894
+        SectionChoice.Trial d12 = choice.tried().get(2);
+        assertTrue(d12.pass());
+        assertEquals(264_000 / 123.0 / 2400, d12.ratio(), 1e-9);
+    }
+
     @Test
     void aJobThatNamesItsSectionIsLeftAsItIs() throws Exception {
         Job named = TestJobs.job(steelBeam("[ W16X26 ]", false).replace("{ choose: [ W16X26 ] }", "{ designation: W16X26 }"));
