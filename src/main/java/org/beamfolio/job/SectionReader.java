@@ -49,9 +49,10 @@ final class SectionReader {
         if (f == null) {
             return null;
         }
-        if (f.has("choose")) {
+        if (f.node().entries().containsKey("choose")) {
             // the candidates take the place of a designation, shape or size: every other key is refused
-            Section chosen = ChoiceReader.read(context, id, f.optional("choose"), f.path("choose"));
+            f.optional("choose");
+            Section chosen = ChoiceReader.read(context, id, f.node().entries().get("choose").value(), f.path("choose"));
             f.rejectUnknown(SECTION_KEYS);
             return chosen;
         }
