@@ -64,8 +64,13 @@ public final class Selection {
         }
         SectionChoice searched = open.choice().withTried(tried);
         SectionChoice.Trial chosen = searched.chosen();
-        if (chosen == null) {
+        if (chosen == null && firstRefusal != null) {
             throw firstRefusal;
+        }
+        if (chosen == null) {
+            // the reader refuses listed shapes outside the design's scope, and no family has only such shapes
+            throw new IllegalStateException("no candidate for section " + open.id() + " could be checked: "
+                    + tried.get(0).description());
         }
         return Jobs.withSection(job, open.chosenAs(chosen.section(), searched));
     }
