@@ -53,7 +53,7 @@ final class MemberSolver {
     private static Done solve(JobReading reading, Job member, Map<String, AnalysisResult> solved) {
         String prefix = "member " + member.member() + ": ";
         try {
-            AnalysisResult result = Analysis.run(MemberLoads.withReactions(member, solved));
+            AnalysisResult result = Analysis.run(org.beamfolio.selection.Selection.resolve(MemberLoads.withReactions(member, solved)));
             return new Done(new PackageRenderer.Member(member.member(), result, Checks.run(result)), null);
         } catch (UnstableBeamException e) {
             Instability i = e.instability();

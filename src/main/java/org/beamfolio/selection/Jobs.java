@@ -3,7 +3,7 @@ package org.beamfolio.selection;
 import org.beamfolio.model.Job;
 import org.beamfolio.model.Section;
 
-/** A job with one section replaced, everything else as read. */
+/** A job (or one member of a job with members) with one section replaced, everything else as read. */
 final class Jobs {
     private Jobs() {}
 
@@ -11,6 +11,6 @@ final class Jobs {
         return new Job(job.name(), job.sourceText(), job.sha256(), job.project(), job.report(), job.materials(),
                 Selection.sections(job, section), job.beam(), job.loads(), job.cases(), job.combinationSet(),
                 job.combinations(), job.pattern(), job.stressCheck(), job.deflectionLimits(), job.sourceBytes(),
-                job.takeOff(), job.steelDesign(), job.timber());
+                job.takeOff(), job.steelDesign(), job.timber(), job.member(), job.reactionLoads());
     }
 }

@@ -102,6 +102,42 @@ class ChooseSectionCommandTest {
         assertEquals(List.of(), written());
     }
 
+    /**
+     * In a job with members, each member that uses a section to choose gets its own choice, and a
+     * member carrying its reaction carries the reaction of the section chosen: the joists of the
+     * framing example chosen from 2x8 to 2x12 and the girder from W shapes no deeper than 12.5 in.
+     */
+    @Test
+    void eachMemberOfAJobWithMembersChoosesItsOwnSection() throws Exception {
+        String text = Files.readString(Path.of("example-jobs/two-storey-framing-project.yaml"))
+                .replace("  girder: { designation: W12X26 }", "  girder: { choose: { family: W, depth_max: 12.5 in } }")
+                .replace("  joist: { lumber: 2x10 }", "  joist: { choose: { lumber: [ 2x8, 2x10, 2x12 ] } }");
+        assertTrue(text.contains("choose: { family: W") && text.contains("choose: { lumber:"), "the example still names those sections");
+        Path file = temp.resolve("framing.yaml");
+        Files.writeString(file, text);
+        Path out = temp.resolve("out");
+        Run run = Run.of("build", file.toString(), "--out", out.toString());
+        assertEquals(Main.OK, run.status(), run.err());
+        JsonNode members = new ObjectMapper().readTree(out.resolve("framing.results.json").toFile()).path("members");
+        int chosen = 0;
+        for (JsonNode m : members) {
+            for (JsonNode section : m.path("sections")) {
+                if (section.has("candidates")) {
+                    chosen++;
+                    JsonNode last = section.path("candidates").get(section.path("candidates").size() - 1);
+                    // the last candidate tried is the one chosen, it passes, and it is the one the section names
+                    assertTrue(last.path("chosen").asBoolean() && last.path("pass").asBoolean(), m.path("id").asText());
+                    assertEquals(last.has("designation") ? last.path("designation").asText() : last.path("lumber").asText(),
+                            section.has("designation") ? section.path("designation").asText() : section.path("lumber").asText());
+                }
+            }
+        }
+        assertTrue(chosen >= 2, "the joists and the girder are chosen member by member: " + chosen);
+        Run candidates = Run.of("check", "--candidates", file.toString());
+        assertTrue(candidates.out().contains("member G-1"), candidates.out());
+        assertTrue(candidates.out().contains("choosing section girder"), candidates.out());
+    }
+
     @Test
     void whenNoCandidatePassesThePackageIsWrittenWithTheBestAndFlagged() throws Exception {
         Path out = temp.resolve("out");
