@@ -18,6 +18,7 @@ import org.beamfolio.job.RevisionInputs;
 import org.beamfolio.report.PackageRenderer;
 import org.beamfolio.checks.CheckOutcome;
 import org.beamfolio.report.PreviousRevision;
+import org.beamfolio.report.pdf.PdfBytes;
 import org.beamfolio.results.ResultsWriter;
 
 /**
@@ -74,16 +75,9 @@ final class Pipeline {
         }
     }
 
-    private static final java.util.regex.Pattern PAGE = java.util.regex.Pattern.compile("/Type\\s*/Page(?![s\\w])");
-
     /** Pages of a PDF written by the renderer (its page objects are not compressed). */
     static int pages(byte[] pdf) {
-        java.util.regex.Matcher m = PAGE.matcher(new String(pdf, StandardCharsets.ISO_8859_1));
-        int count = 0;
-        while (m.find()) {
-            count++;
-        }
-        return count;
+        return PdfBytes.pages(pdf);
     }
 
     /**

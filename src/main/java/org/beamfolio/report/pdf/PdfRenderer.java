@@ -26,8 +26,6 @@ import java.util.GregorianCalendar;
 import java.util.HexFormat;
 import java.util.Map;
 import java.util.TimeZone;
-import java.util.regex.Matcher;
-import java.util.regex.Pattern;
 import org.beamfolio.report.drawing.Drawing;
 import org.xhtmlrenderer.pdf.DefaultPDFCreationListener;
 import org.xhtmlrenderer.pdf.ITextRenderer;
@@ -39,8 +37,6 @@ import org.xhtmlrenderer.pdf.ITextRenderer;
  * version therefore give the same bytes. The job file travels inside as an attachment.
  */
 public final class PdfRenderer {
-    private static final Pattern ID = Pattern.compile("/ID\\s*\\[\\s*<([0-9a-fA-F]+)>\\s*<([0-9a-fA-F]+)>\\s*\\]");
-
     private final EmbeddedFonts fonts = new EmbeddedFonts();
     private final DocumentBuilder parser = xhtmlParser();
 
@@ -198,28 +194,22 @@ public final class PdfRenderer {
      * are hexadecimal strings of the same length, so no offset in the file moves.
      */
     static byte[] withContentId(byte[] pdf) {
-        String text = new String(pdf, StandardCharsets.ISO_8859_1);
-        Matcher m = ID.matcher(text);
-        int start = -1;
-        while (m.find()) {
-            start = m.start();
-        }
-        if (start < 0) {
+        int[] id = PdfBytes.lastId(pdf);
+        if (id == null) {
             return pdf;
         }
-        m.find(start);
-        int length = m.group(1).length();
+        int length = id[1] - id[0];
         byte[] blanked = pdf.clone();
-        fill(blanked, m.start(1), m.end(1));
-        fill(blanked, m.start(2), m.end(2));
+        fill(blanked, id[0], id[1]);
+        fill(blanked, id[2], id[3]);
         String digest = HexFormat.of().formatHex(sha256(blanked)).toUpperCase();
         while (digest.length() < length) {
             digest = digest + digest;
         }
-        byte[] id = digest.substring(0, length).getBytes(StandardCharsets.ISO_8859_1);
+        byte[] hex = digest.substring(0, length).getBytes(StandardCharsets.ISO_8859_1);
         byte[] result = pdf.clone();
-        System.arraycopy(id, 0, result, m.start(1), length);
-        System.arraycopy(id, 0, result, m.start(2), Math.min(length, m.end(2) - m.start(2)));
+        System.arraycopy(hex, 0, result, id[0], length);
+        System.arraycopy(hex, 0, result, id[2], Math.min(length, id[3] - id[2]));
         return result;
     }
 
