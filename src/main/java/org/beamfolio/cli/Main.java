@@ -3,6 +3,9 @@ package org.beamfolio.cli;
 import java.io.PrintStream;
 import java.io.PrintWriter;
 import java.nio.charset.StandardCharsets;
+import java.util.LinkedHashMap;
+import java.util.Map;
+import java.util.function.Supplier;
 import org.beamfolio.results.Version;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -18,9 +21,7 @@ import picocli.CommandLine.Command;
         exitCodeListHeading = "%nExit status (over several jobs the first that applies, in this order: 1, 2, 3, 0):%n",
         exitCodeList = {"0:every package written (or job checked); every check meets its limit",
                 "3:every package written (or job checked); some check does not meet its limit",
-                "2:invalid input; nothing written for that job", "1:internal failure; nothing half-written"},
-        subcommands = {BuildCommand.class, CheckCommand.class, WatchCommand.class, NewCommand.class, SealCommand.class, VerifyCommand.class,
-                CommandLine.HelpCommand.class})
+                "2:invalid input; nothing written for that job", "1:internal failure; nothing half-written"})
 public final class Main implements Runnable {
     public static final int OK = 0;
     public static final int INTERNAL_FAILURE = 1;
@@ -35,8 +36,33 @@ public final class Main implements Runnable {
         System.exit(run(args, System.out, System.err));
     }
 
+    /**
+     * The commands by name, in the order the usage lists them. picocli reads every option of every
+     * command it is given by reflection when the command line is made, and loads their classes
+     * (the seal command's among them); a run that names its command is given only that one.
+     */
+    static final Map<String, Supplier<Object>> COMMANDS = commands();
+
+    private static Map<String, Supplier<Object>> commands() {
+        Map<String, Supplier<Object>> commands = new LinkedHashMap<>();
+        commands.put("build", BuildCommand::new);
+        commands.put("check", CheckCommand::new);
+        commands.put("watch", WatchCommand::new);
+        commands.put("new", NewCommand::new);
+        commands.put("seal", SealCommand::new);
+        commands.put("verify", VerifyCommand::new);
+        return commands;
+    }
+
     public static int run(String[] args, PrintStream out, PrintStream err) {
         CommandLine cli = new CommandLine(new Main());
+        Supplier<Object> named = args.length > 0 ? COMMANDS.get(args[0]) : null;
+        if (named != null) {
+            cli.addSubcommand(args[0], named.get());
+        } else {
+            COMMANDS.forEach((name, command) -> cli.addSubcommand(name, command.get()));
+            cli.addSubcommand(new CommandLine.HelpCommand());
+        }
         cli.setOut(new PrintWriter(out, true, StandardCharsets.UTF_8));
         cli.setErr(new PrintWriter(err, true, StandardCharsets.UTF_8));
         cli.setParameterExceptionHandler((e, a) -> {
