@@ -6,14 +6,18 @@
 #   - folders of 20, 50 and 200 jobs (copies of the examples) in one process on every core, with
 #     the time per package after the first, the peak resident memory and the heap still live
 #     after the last collection (read from the collector's log).
-# Needs the jar (./mvnw package). Prints seconds and megabytes.
+# Needs the jar (./mvnw package). Prints seconds and megabytes. TOOL=target/beamfolio times the
+# package and the folders through the launcher (its class-data archive in a fresh cache, written
+# by the warm-up run) instead of java -jar.
 set -euo pipefail
 cd "$(dirname "$0")/../.."
 RUNS=${RUNS:-5}
+read -r -a TOOL <<< "${TOOL:-java -jar target/beamfolio.jar}"
 BATCH_RUNS=${BATCH_RUNS:-3}
 JOB=${JOB:-example-jobs/warehouse-mezzanine-simple-span.yaml}
 out=$(mktemp -d)
 trap 'rm -rf "$out"' EXIT
+export BEAMFOLIO_CACHE="$out/cache"
 ./mvnw -q -Pbench -DskipTests test-compile
 CP=target/beamfolio.jar:target/test-classes
 median() { sort -n | awk '{ a[NR] = $1 } END { print a[int((NR + 1) / 2)] }'; }
@@ -30,7 +34,7 @@ measure() {
   rss=$(( $(printf '%s\n' "${mems[@]}" | median) / 1024 ))
   printf '%-34s median %6s s, peak RSS %5s MB\n' "$label" "$time" "$rss"
 }
-measure "one package, cold" "$RUNS" java -jar target/beamfolio.jar build "$JOB" --out "$out/one"
+measure "one package, cold" "$RUNS" "${TOOL[@]}" build "$JOB" --out "$out/one"
 one=$time
 measure "hello PDF (OpenPDF)" "$RUNS" java -cp "$CP" org.beamfolio.bench.HelloPdf "$out/hello.pdf"
 hello=$time
@@ -45,7 +49,7 @@ for n in 20 50 200; do
       cp "$f" "$out/jobs/$(basename "$f" .yaml)-$i.yaml"; i=$((i + 1))
     done
   done
-  measure "folder of $n jobs" "$BATCH_RUNS" java -jar target/beamfolio.jar build "$out/jobs" --out "$out/batch"
+  measure "folder of $n jobs" "$BATCH_RUNS" "${TOOL[@]}" build "$out/jobs" --out "$out/batch"
   awk -v t="$time" -v o="$one" -v n="$n" 'BEGIN { printf "  %d ms a package after the first\n", 1000 * (t - o) / (n - 1) }'
   java -Xlog:gc:file="$out/gc.log" -jar target/beamfolio.jar build "$out/jobs" --out "$out/batch" >/dev/null 2>&1
   grep -o '[0-9]*M->[0-9]*M([0-9]*M)' "$out/gc.log" | tail -1 \
