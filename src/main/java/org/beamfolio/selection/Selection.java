@@ -12,7 +12,9 @@ import org.beamfolio.catalogue.ShapeProperty;
 import org.beamfolio.checks.CheckOutcome;
 import org.beamfolio.checks.Checks;
 import org.beamfolio.checks.timber.TimberInputException;
+import org.beamfolio.design.steel.Detail;
 import org.beamfolio.design.steel.OutOfScopeException;
+import org.beamfolio.design.steel.SteelDesignWork;
 import org.beamfolio.model.Job;
 import org.beamfolio.model.Material;
 import org.beamfolio.model.Section;
@@ -122,13 +124,11 @@ public final class Selection {
     private record Trial(SectionChoice.Trial entry, TimberInputException refusal) {}
 
     private static Trial trial(Job job, Section open, Section candidate) throws UnstableBeamException {
-        Section asNamed = new Section(open.id(), candidate.shape(), candidate.flip(), candidate.lumber());
-        Job named = Jobs.withSection(job, asNamed);
+        Job named = asNamed(job, open, candidate);
         double weight = weight(job, open.id(), candidate);
         double area = area(candidate);
         try {
-            AnalysisResult result = Analysis.run(named);
-            List<CheckOutcome> outcomes = Checks.run(result);
+            List<CheckOutcome> outcomes = outcomes(named, Detail.VALUES);
             CheckOutcome governing = outcomes.stream().max(Comparator.comparingDouble(CheckOutcome::ratio)).orElse(null);
             boolean pass = outcomes.stream().allMatch(CheckOutcome::pass);
             if (governing == null) {
@@ -141,6 +141,24 @@ public final class Selection {
         } catch (OutOfScopeException e) {
             return new Trial(new SectionChoice.Trial(candidate, weight, area, "out of scope", e.getMessage(), Double.NaN, false), null);
         }
+    }
+
+    /** The job with the section to choose replaced by the candidate, as if the engineer had named it. */
+    static Job asNamed(Job job, Section open, Section candidate) {
+        return Jobs.withSection(job, new Section(open.id(), candidate.shape(), candidate.flip(), candidate.lumber()));
+    }
+
+    /**
+     * Every check outcome of the job as named, its steel design worked for {@code detail}: a
+     * candidate's design is worked for its values only ({@link Detail#VALUES}), as no package prints
+     * it (the chosen one is analysed and designed afresh, with its equations, for the package).
+     */
+    static List<CheckOutcome> outcomes(Job named, Detail detail) throws UnstableBeamException {
+        AnalysisResult result = Analysis.run(named);
+        if (detail == Detail.VALUES) {
+            SteelDesignWork.valuesOnly(result);
+        }
+        return Checks.run(result);
     }
 
     /** Weight per length, N/m: the catalogue's W, or density x A of the material the section is used with (NaN without a density). */

@@ -23,9 +23,9 @@ public final class F3FlangeLocalBuckling implements FlexuralLimitState {
     }
 
     @Override
-    public LimitStateResult evaluate(SteelMember m, FlexureCase bending) {
+    public LimitStateResult evaluate(SteelMember m, FlexureCase bending, Work work) {
         var s = m.shape();
-        Work w = new Work().given("Fy", m.fy(), Kind.STRESS).given("E", m.e(), Kind.STRESS)
+        Work w = work.given("Fy", m.fy(), Kind.STRESS).given("E", m.e(), Kind.STRESS)
                 .given("Zx", s.get(ZX), Kind.MODULUS).given("Sx", s.get(SX), Kind.MODULUS)
                 .given("lambda", s.get(BF_2TF), Kind.NUMBER);
         w.eq("F2-1", "Mp", Kind.MOMENT, "{Fy} * {Zx}");

@@ -26,9 +26,9 @@ public final class F7LateralTorsionalBuckling implements FlexuralLimitState {
     }
 
     @Override
-    public LimitStateResult evaluate(SteelMember m, FlexureCase bending) {
+    public LimitStateResult evaluate(SteelMember m, FlexureCase bending, Work work) {
         var s = m.shape();
-        Work w = new Work().given("Fy", m.fy(), Kind.STRESS).given("E", m.e(), Kind.STRESS)
+        Work w = work.given("Fy", m.fy(), Kind.STRESS).given("E", m.e(), Kind.STRESS)
                 .given("Zx", s.get(ZX), Kind.MODULUS).given("Sx", s.get(SX), Kind.MODULUS)
                 .given("ry", s.get(RY), Kind.LENGTH).given("J", s.get(J), Kind.INERTIA).given("Ag", s.get(A), Kind.AREA)
                 .given("Lb", bending.lb(), Kind.LENGTH).given("Cb", bending.cb(), Kind.NUMBER);

@@ -22,9 +22,9 @@ public final class F7WebLocalBuckling implements FlexuralLimitState {
     }
 
     @Override
-    public LimitStateResult evaluate(SteelMember m, FlexureCase bending) {
+    public LimitStateResult evaluate(SteelMember m, FlexureCase bending, Work work) {
         var s = m.shape();
-        Work w = new Work().given("Fy", m.fy(), Kind.STRESS).given("E", m.e(), Kind.STRESS)
+        Work w = work.given("Fy", m.fy(), Kind.STRESS).given("E", m.e(), Kind.STRESS)
                 .given("Zx", s.get(ZX), Kind.MODULUS).given("Sx", s.get(SX), Kind.MODULUS)
                 .given("h/t", s.get(H_TDES), Kind.NUMBER);
         w.eq("F7-1", "Mp", Kind.MOMENT, "{Fy} * {Zx}");

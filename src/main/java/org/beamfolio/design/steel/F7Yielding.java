@@ -15,8 +15,8 @@ public final class F7Yielding implements FlexuralLimitState {
     }
 
     @Override
-    public LimitStateResult evaluate(SteelMember m, FlexureCase bending) {
-        Work w = new Work().given("Fy", m.fy(), Kind.STRESS).given("Zx", m.shape().get(ZX), Kind.MODULUS);
+    public LimitStateResult evaluate(SteelMember m, FlexureCase bending, Work work) {
+        Work w = work.given("Fy", m.fy(), Kind.STRESS).given("Zx", m.shape().get(ZX), Kind.MODULUS);
         double mn = w.eq("F7-1", "Mn", Kind.MOMENT, "{Fy} * {Zx}");
         return LimitStateResult.governs(name(), clause(m.edition()), mn, w, "Mn = Mp");
     }

@@ -20,9 +20,9 @@ public final class F8LocalBuckling implements FlexuralLimitState {
     }
 
     @Override
-    public LimitStateResult evaluate(SteelMember m, FlexureCase bending) {
+    public LimitStateResult evaluate(SteelMember m, FlexureCase bending, Work work) {
         var s = m.shape();
-        Work w = new Work().given("Fy", m.fy(), Kind.STRESS).given("E", m.e(), Kind.STRESS)
+        Work w = work.given("Fy", m.fy(), Kind.STRESS).given("E", m.e(), Kind.STRESS)
                 .given("S", s.get(SX), Kind.MODULUS).given("D/t", s.get(D_T), Kind.NUMBER);
         double lp = w.eq("Table B4.1b case 20", "lambda_p", Kind.NUMBER, "0.07 * {E} / {Fy}");
         double lr = w.eq("Table B4.1b case 20", "lambda_r", Kind.NUMBER, "0.31 * {E} / {Fy}");

@@ -24,10 +24,10 @@ public final class F9FlangeLocalBuckling implements FlexuralLimitState {
     }
 
     @Override
-    public LimitStateResult evaluate(SteelMember m, FlexureCase bending) {
+    public LimitStateResult evaluate(SteelMember m, FlexureCase bending, Work work) {
         var s = m.shape();
         String note = TeeNote.of(m.edition());
-        Work w = new Work().given("Fy", m.fy(), Kind.STRESS).given("E", m.e(), Kind.STRESS)
+        Work w = work.given("Fy", m.fy(), Kind.STRESS).given("E", m.e(), Kind.STRESS)
                 .given("Zx", s.get(ZX), Kind.MODULUS).given("Sx", s.get(SX), Kind.MODULUS)
                 .given("Ix", s.get(IX), Kind.INERTIA).given("y", s.get(Y_BAR), Kind.LENGTH)
                 .given("lambda", s.get(BF_2TF), Kind.NUMBER);

@@ -21,10 +21,10 @@ public final class F9StemLocalBuckling implements FlexuralLimitState {
     }
 
     @Override
-    public LimitStateResult evaluate(SteelMember m, FlexureCase bending) {
+    public LimitStateResult evaluate(SteelMember m, FlexureCase bending, Work work) {
         var s = m.shape();
         String note = TeeNote.of(m.edition());
-        Work w = new Work().given("Fy", m.fy(), Kind.STRESS).given("E", m.e(), Kind.STRESS)
+        Work w = work.given("Fy", m.fy(), Kind.STRESS).given("E", m.e(), Kind.STRESS)
                 .given("Sx", s.get(SX), Kind.MODULUS).given("d/tw", s.get(D_T), Kind.NUMBER);
         if (!bending.stemInCompression()) {
             return LimitStateResult.doesNotApply(name(), clause(m.edition()), w, "stem in tension: does not apply" + note);

@@ -20,9 +20,9 @@ public final class F9Yielding implements FlexuralLimitState {
     }
 
     @Override
-    public LimitStateResult evaluate(SteelMember m, FlexureCase bending) {
+    public LimitStateResult evaluate(SteelMember m, FlexureCase bending, Work work) {
         var s = m.shape();
-        Work w = new Work().given("Fy", m.fy(), Kind.STRESS).given("Zx", s.get(ZX), Kind.MODULUS)
+        Work w = work.given("Fy", m.fy(), Kind.STRESS).given("Zx", s.get(ZX), Kind.MODULUS)
                 .given("Sx", s.get(SX), Kind.MODULUS);
         w.eq("F9-3", "My", Kind.MOMENT, "{Fy} * {Sx}");
         if (bending.stemInCompression()) {

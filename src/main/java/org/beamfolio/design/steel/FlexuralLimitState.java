@@ -8,5 +8,11 @@ interface FlexuralLimitState {
     /** The clause and equations it follows in an edition. */
     Clause clause(Edition edition);
 
-    LimitStateResult evaluate(SteelMember member, FlexureCase bending);
+    /** Worked with its equations, as the package prints it. */
+    default LimitStateResult evaluate(SteelMember member, FlexureCase bending) {
+        return evaluate(member, bending, new Work(Detail.PRINTED));
+    }
+
+    /** Worked on {@code work}, a blank sheet that keeps the equations or only the values. */
+    LimitStateResult evaluate(SteelMember member, FlexureCase bending, Work work);
 }

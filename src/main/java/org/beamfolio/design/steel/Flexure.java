@@ -23,6 +23,11 @@ public final class Flexure {
     private Flexure() {}
 
     public static Strength strength(SteelMember m, FlexureCase bending) {
+        return strength(m, bending, Detail.PRINTED);
+    }
+
+    /** As {@link #strength(SteelMember, FlexureCase)}, the limit states' equations kept or not as {@code detail} says. */
+    public static Strength strength(SteelMember m, FlexureCase bending, Detail detail) {
         List<Slenderness> compactness = compactness(m);
         String section = section(m, compactness);
         List<FlexuralLimitState> states = switch (section) {
@@ -36,7 +41,7 @@ public final class Flexure {
         };
         List<LimitStateResult> evaluated = new ArrayList<>();
         for (FlexuralLimitState s : states) {
-            evaluated.add(s.evaluate(m, bending));
+            evaluated.add(s.evaluate(m, bending, new Work(detail)));
         }
         Map<String, Double> factors = new LinkedHashMap<>();
         factors.put("Lb", bending.lb());

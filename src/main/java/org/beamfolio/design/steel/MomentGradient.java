@@ -14,6 +14,9 @@ import org.beamfolio.analysis.Roots;
  * couple), the larger absolute value of the two sides is taken, which gives the smaller Cb. A
  * segment that ends at an unbraced free end takes Cb = 1.0 (F1: permitted for cantilevers and
  * overhangs whose free end is unbraced); so does a segment without moment.
+ *
+ * @param equation the equation that gave Cb, as the package prints it; null when worked for
+ *                 {@link Detail#VALUES}
  */
 public record MomentGradient(double from, double to, double cb, double mMax, double atMax, double mA, double mB,
                              double mC, boolean freeEnd, Equation equation) {
@@ -32,12 +35,17 @@ public record MomentGradient(double from, double to, double cb, double mMax, dou
      * @param endsAtFreeEnd whether one end of the segment is an unbraced free end
      */
     public static MomentGradient of(Field moment, double from, double to, boolean endsAtFreeEnd) {
+        return of(moment, from, to, endsAtFreeEnd, Detail.PRINTED);
+    }
+
+    /** As {@link #of(Field, double, double, boolean)}; worked for {@link Detail#VALUES}, its {@code equation} is null. */
+    public static MomentGradient of(Field moment, double from, double to, boolean endsAtFreeEnd, Detail detail) {
         if (!(to > from)) {
             throw new IllegalArgumentException("an unbraced segment needs to > from, got [" + from + ", " + to + "]");
         }
         double[] max = absoluteMaximum(moment, from, to);
         double quarter = (to - from) / 4;
-        Work w = new Work().given("Mmax", max[0], Kind.MOMENT)
+        Work w = new Work(detail).given("Mmax", max[0], Kind.MOMENT)
                 .given("MA", absoluteAt(moment, from + quarter), Kind.MOMENT)
                 .given("MB", absoluteAt(moment, from + 2 * quarter), Kind.MOMENT)
                 .given("MC", absoluteAt(moment, from + 3 * quarter), Kind.MOMENT);
@@ -51,7 +59,7 @@ public record MomentGradient(double from, double to, double cb, double mMax, dou
         }
         List<Equation> eqs = w.equations();
         return new MomentGradient(from, to, cb, max[0], max[1], w.value("MA").value(), w.value("MB").value(),
-                w.value("MC").value(), endsAtFreeEnd, eqs.get(eqs.size() - 1));
+                w.value("MC").value(), endsAtFreeEnd, eqs.isEmpty() ? null : eqs.get(eqs.size() - 1));
     }
 
     /** The largest |M| on [from, to] and where, from the pieces' end values and stationary points. */

@@ -53,12 +53,15 @@ public record SteelDesignWork(SteelMember member, Method method, List<FlexureRow
     /** Where a bearing length is given: a support, or the point loads at one position (the least length given there). */
     private record BearingPlace(boolean support, int index, double at, double length, List<Load.Point> loads) {}
 
+    /** A flange segment as a key: its flange and ends (boxed, so equal as Double.equals says, bit for bit). */
+    private record SegmentKey(Bracing.Flange flange, Double from, Double to) {}
+
     /** Per flange segment (by flange, then along the beam), the combination with the largest ratio; the earlier one on a tie. */
     public List<FlexureRow> governingPerSegment() {
-        java.util.Map<String, FlexureRow> best = new java.util.LinkedHashMap<>();
+        java.util.Map<SegmentKey, FlexureRow> best = new java.util.LinkedHashMap<>();
         for (FlexureRow row : flexure) {
             UnbracedSegments.Segment s = row.segment();
-            best.merge(s.flange() + ":" + s.from() + ":" + s.to(), row, (a, b) -> b.ratio() > a.ratio() ? b : a);
+            best.merge(new SegmentKey(s.flange(), s.from(), s.to()), row, (a, b) -> b.ratio() > a.ratio() ? b : a);
         }
         List<FlexureRow> result = new ArrayList<>(best.values());
         result.sort(java.util.Comparator.comparing((FlexureRow r) -> r.segment().flange())
@@ -71,7 +74,21 @@ public record SteelDesignWork(SteelMember member, Method method, List<FlexureRow
         if (result.job().steelDesign() == null) {
             return null;
         }
-        return result.worked().get(SteelDesignWork.class, () -> work(result));
+        return result.worked().get(SteelDesignWork.class, () -> work(result, Detail.PRINTED));
+    }
+
+    /**
+     * The design of the job's beam worked for its values only ({@link Detail#VALUES}: the same
+     * strengths and ratios, bit for bit, without the equations the package prints), and kept with
+     * the analysis, so the checks run on it afterwards read these values. For an analysis whose
+     * package is never printed: a candidate tried in the search for a section. Null without
+     * {@code design.steel}; the work already kept when the analysis was designed before.
+     */
+    public static SteelDesignWork valuesOnly(AnalysisResult result) {
+        if (result.job().steelDesign() == null) {
+            return null;
+        }
+        return result.worked().get(SteelDesignWork.class, () -> work(result, Detail.VALUES));
     }
 
     /** The member the job designs: its one catalogue shape in its material, to its edition. */
@@ -135,7 +152,7 @@ public record SteelDesignWork(SteelMember member, Method method, List<FlexureRow
         return sum;
     }
 
-    private static SteelDesignWork work(AnalysisResult result) {
+    private static SteelDesignWork work(AnalysisResult result, Detail detail) {
         Job job = result.job();
         Beam beam = job.beam();
         SteelMember member = member(job);
@@ -157,11 +174,11 @@ public record SteelDesignWork(SteelMember member, Method method, List<FlexureRow
             }
             Field moment = c.response().moment();
             for (UnbracedSegments.Segment seg : UnbracedSegments.of(beam, moment)) {
-                MomentGradient gradient = MomentGradient.of(moment, seg.from(), seg.to(), seg.freeEnd());
+                MomentGradient gradient = MomentGradient.of(moment, seg.from(), seg.to(), seg.freeEnd(), detail);
                 // F1-1 gives 1.0 when the moment is uniform; round-off may put it a hair below
                 double cb = Math.max(1.0, gradient.cb());
                 boolean stemInCompression = seg.flange() == Bracing.Flange.BOTTOM; // tees are catalogued stem down
-                Strength strength = Flexure.strength(member, new FlexureCase(seg.lb(), cb, stemInCompression));
+                Strength strength = Flexure.strength(member, new FlexureCase(seg.lb(), cb, stemInCompression), detail);
                 double demand = Math.abs(seg.demand().value());
                 flexure.add(new FlexureRow(c, seg, gradient, strength, demand, strength.available(method),
                         strength.ratio(demand, method)));

@@ -13,6 +13,17 @@ import java.util.Map;
 final class Work {
     private final Map<String, Value> known = new LinkedHashMap<>();
     private final List<Equation> equations = new ArrayList<>();
+    private final boolean recorded;
+
+    /** A sheet that records every equation, for the package. */
+    Work() {
+        this(Detail.PRINTED);
+    }
+
+    /** A sheet that records the equations for {@link Detail#PRINTED}, and only works the values for {@link Detail#VALUES}. */
+    Work(Detail detail) {
+        this.recorded = detail == Detail.PRINTED;
+    }
 
     /** A value the equations may use, e.g. Fy or Zx. */
     Work given(String symbol, double value, Kind kind) {
@@ -44,7 +55,9 @@ final class Work {
         double raw = Expression.evaluate(template, known);
         double v = cap == null ? raw : Math.min(raw, cap.value());
         Value result = Value.of(symbol, v, kind);
-        equations.add(new Equation(number, result, template, inputsOf(template), cap));
+        if (recorded) {
+            equations.add(new Equation(number, result, template, inputsOf(template), cap));
+        }
         known.put(symbol, result);
         return v;
     }
@@ -57,6 +70,7 @@ final class Work {
         return v;
     }
 
+    /** The equations recorded, in order; none on a sheet that works the values only. */
     List<Equation> equations() {
         return List.copyOf(equations);
     }
