@@ -85,7 +85,7 @@ public final class Analysis {
         }
         Extremes envelope = Envelope.of(results);
         return new AnalysisResult(job, model, List.copyOf(loads), sections, cases, results, envelope, dropped, source, spans,
-                patterns, reactions, GoverningStresses.of(job, model, results), new Worked());
+                patterns, reactions, new Worked());
     }
 
     private static Response solve(StructureModel model, List<Load> loads, String name, Job job) throws UnstableBeamException {

@@ -15,16 +15,22 @@ import org.beamfolio.section.SectionProperties;
  * @param loads every load analysed: the job's, then the self weight
  * @param patterns the pattern cases by region and the arrangements examined (none without {@code pattern})
  * @param reactions the largest and smallest reaction at each support over every combination and arrangement
- * @param stresses the governing stresses, found once for the checks, the worked steps and the summary
  * @param worked what later stages work out from this analysis, each worked once ({@link Worked})
  */
 public record AnalysisResult(Job job, StructureModel model, List<org.beamfolio.model.Load> loads, Map<String, SectionProperties> sections,
                              Map<String, Response> cases, List<CombinationResult> combinations,
                              Extremes envelope, List<String> droppedCombinations, String combinationSource,
-                             List<Span> spans, Patterns patterns, ReactionEnvelope reactions, GoverningStresses stresses,
-                             Worked worked) {
+                             List<Span> spans, Patterns patterns, ReactionEnvelope reactions, Worked worked) {
     /** Below this smallest pivot ratio the package warns that the model is badly conditioned. */
     public static final double POOR_CONDITIONING = 1e-8;
+
+    /**
+     * The governing stresses, found once for the checks, the worked steps and the summary: the
+     * first time they are asked for, as a search that checks steel to a specification never reads them.
+     */
+    public GoverningStresses stresses() {
+        return worked.get(GoverningStresses.class, () -> GoverningStresses.of(job, model, combinations));
+    }
 
     /**
      * The smallest ratio, over every case solved, of a pivot of the factorisation to its unknown's
