@@ -28,8 +28,32 @@ public final class Flexure {
 
     /** As {@link #strength(SteelMember, FlexureCase)}, the limit states' equations kept or not as {@code detail} says. */
     public static Strength strength(SteelMember m, FlexureCase bending, Detail detail) {
+        return strength(provisions(m), bending, detail);
+    }
+
+    /**
+     * The section of Chapter F that applies to a member and the compactness it rests on, which do
+     * not depend on the bending: a design works them once and reads them for every segment.
+     */
+    public record Provisions(SteelMember member, List<Slenderness> compactness, String section) {
+        public Provisions {
+            compactness = List.copyOf(compactness);
+        }
+    }
+
+    /**
+     * @throws OutOfScopeException when the shape is outside the flexural provisions implemented
+     */
+    public static Provisions provisions(SteelMember m) {
         List<Slenderness> compactness = compactness(m);
-        String section = section(m, compactness);
+        return new Provisions(m, compactness, section(m, compactness));
+    }
+
+    /** The strength for one bending case, by the provisions found for the member. */
+    public static Strength strength(Provisions provisions, FlexureCase bending, Detail detail) {
+        SteelMember m = provisions.member();
+        List<Slenderness> compactness = provisions.compactness();
+        String section = provisions.section();
         List<FlexuralLimitState> states = switch (section) {
             case "F2" -> List.of(new F2Yielding(), new F2LateralTorsionalBuckling("F2.2"));
             case "F3" -> List.of(new F2LateralTorsionalBuckling("F3.1"), new F3FlangeLocalBuckling());

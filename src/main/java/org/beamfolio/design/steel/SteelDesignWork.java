@@ -168,6 +168,7 @@ public record SteelDesignWork(SteelMember member, Method method, List<FlexureRow
             web.add(new Strength[] {WebLocalYielding.strength(member, p.length(), fromEnd),
                     WebLocalCrippling.strength(member, p.length(), fromEnd)});
         }
+        Flexure.Provisions provisions = null;
         for (CombinationResult c : result.combinations()) {
             if (!ofMethod(c, method, job)) {
                 continue;
@@ -178,7 +179,11 @@ public record SteelDesignWork(SteelMember member, Method method, List<FlexureRow
                 // F1-1 gives 1.0 when the moment is uniform; round-off may put it a hair below
                 double cb = Math.max(1.0, gradient.cb());
                 boolean stemInCompression = seg.flange() == Bracing.Flange.BOTTOM; // tees are catalogued stem down
-                Strength strength = Flexure.strength(member, new FlexureCase(seg.lb(), cb, stemInCompression), detail);
+                if (provisions == null) {
+                    // found at the first segment, where a shape outside Chapter F's provisions is refused
+                    provisions = Flexure.provisions(member);
+                }
+                Strength strength = Flexure.strength(provisions, new FlexureCase(seg.lb(), cb, stemInCompression), detail);
                 double demand = Math.abs(seg.demand().value());
                 flexure.add(new FlexureRow(c, seg, gradient, strength, demand, strength.available(method),
                         strength.ratio(demand, method)));
