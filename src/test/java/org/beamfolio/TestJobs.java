@@ -38,6 +38,38 @@ public final class TestJobs {
                 + "loads:\n" + loads;
     }
 
+    /**
+     * A 20 ft simple span of A992 steel, top flange braced, under D 0.5 klf and L 1.5 klf (LRFD,
+     * AISC 360-16), whose section b1 is chosen by {@code choose}; with {@code selfWeight} the
+     * chosen shape's own weight is added to D. Mu = (1.2 x 0.5 + 1.6 x 1.5) x 20^2 / 8 = 150 kip*ft
+     * without self weight (statics by hand).
+     */
+    public static String chosenFloorBeam(String choose, boolean selfWeight) {
+        return """
+                beamfolio: 1
+                project: { title: Test floor beam, number: T-41, date: 2026-12-02 }
+                report: { units: US }
+                materials:
+                  a992: { grade: A992 }
+                sections:
+                  b1: { choose: %s }
+                beam:
+                  length: 20 ft
+                  section: b1
+                  material: a992
+                  bracing: { top: continuous, bottom: supports }
+                  supports:
+                    - { at: 0 ft, type: pin }
+                    - { at: 20 ft, type: roller }
+                %s
+                loads:
+                  - { case: D, type: uniform, w: 0.5 klf }
+                  - { case: L, type: uniform, w: 1.5 klf }
+                combinations: ASCE7-LRFD
+                design: { steel: AISC360-16 }
+                """.formatted(choose, selfWeight ? "  self_weight: D" : "");
+    }
+
     public static JobReading read(String text) {
         return JobReader.read("test.yaml", "test", text.getBytes(StandardCharsets.UTF_8));
     }

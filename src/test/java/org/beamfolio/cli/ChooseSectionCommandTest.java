@@ -27,28 +27,7 @@ class ChooseSectionCommandTest {
 
     private Path job(String candidates) throws Exception {
         Path file = temp.resolve("choose.yaml");
-        Files.writeString(file, """
-                beamfolio: 1
-                project: { title: Test floor beam, number: T-43, date: 2026-12-02 }
-                report: { units: US }
-                materials:
-                  a992: { grade: A992 }
-                sections:
-                  b1: { choose: %s }
-                beam:
-                  length: 20 ft
-                  section: b1
-                  material: a992
-                  bracing: { top: continuous, bottom: supports }
-                  supports:
-                    - { at: 0 ft, type: pin }
-                    - { at: 20 ft, type: roller }
-                loads:
-                  - { case: D, type: uniform, w: 0.5 klf }
-                  - { case: L, type: uniform, w: 1.5 klf }
-                combinations: ASCE7-LRFD
-                design: { steel: AISC360-16 }
-                """.formatted(candidates));
+        Files.writeString(file, org.beamfolio.TestJobs.chosenFloorBeam(candidates, false));
         return file;
     }
 

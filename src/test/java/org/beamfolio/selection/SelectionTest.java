@@ -29,29 +29,7 @@ class SelectionTest {
      * wu = 1.2 (0.5) + 1.6 (1.5) = 3.0 klf and Mu = 3.0 (20)^2 / 8 = 150 kip*ft (by hand).
      */
     private static String steelBeam(String choose, boolean selfWeight) {
-        return """
-                beamfolio: 1
-                project: { title: Test floor beam, number: T-41 }
-                report: { units: US }
-                materials:
-                  a992: { grade: A992 }
-                sections:
-                  b1: { choose: %s }
-                beam:
-                  length: 20 ft
-                  section: b1
-                  material: a992
-                  bracing: { top: continuous, bottom: supports }
-                  supports:
-                    - { at: 0 ft, type: pin }
-                    - { at: 20 ft, type: roller }
-                %s
-                loads:
-                  - { case: D, type: uniform, w: 0.5 klf }
-                  - { case: L, type: uniform, w: 1.5 klf }
-                combinations: ASCE7-LRFD
-                design: { steel: AISC360-16 }
-                """.formatted(choose, selfWeight ? "  self_weight: D" : "");
+        return TestJobs.chosenFloorBeam(choose, selfWeight);
     }
 
     private static Job resolve(String text) throws Exception {
