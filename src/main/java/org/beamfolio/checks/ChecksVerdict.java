@@ -27,13 +27,13 @@ public final class ChecksVerdict {
      * The verdict of a package of several members: each failing check named under its member,
      * {@code fail: G-1/deflection-L-max}.
      */
-    public static String ofMembers(java.util.Map<String, List<CheckOutcome>> byMember) {
-        List<String> failing = byMember.entrySet().stream().flatMap(m -> m.getValue().stream().filter(c -> !c.pass())
-                .map(c -> m.getKey() + "/" + c.id())).toList();
+    public static String ofMembers(List<CheckedMember> members) {
+        List<String> failing = members.stream().flatMap(m -> m.checks().stream().filter(c -> !c.pass())
+                .map(c -> m.id() + "/" + c.id())).toList();
         if (!failing.isEmpty()) {
             return "fail: " + String.join(", ", failing);
         }
-        return byMember.values().stream().allMatch(List::isEmpty) ? "none" : "pass";
+        return members.stream().allMatch(m -> m.checks().isEmpty()) ? "none" : "pass";
     }
 
     /** True when the verdict says some check does not meet its limit. */

@@ -1,5 +1,6 @@
 package org.beamfolio.cli;
 
+import org.beamfolio.checks.CheckedMember;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
@@ -16,7 +17,6 @@ import org.beamfolio.job.Diagnostic;
 import org.beamfolio.job.JobReading;
 import org.beamfolio.model.Job;
 import org.beamfolio.model.ProjectJob;
-import org.beamfolio.report.PackageRenderer;
 
 /**
  * Solves and checks the members of a job with members along the load path: level by level, each
@@ -27,12 +27,12 @@ final class MemberSolver {
     private MemberSolver() {}
 
     /** One member solved, or the message that says why it cannot be. */
-    private record Done(PackageRenderer.Member member, Diagnostic problem) {}
+    private record Done(CheckedMember member, Diagnostic problem) {}
 
     static Pipeline.Solved solve(JobReading reading) {
         ProjectJob project = reading.project();
         Map<String, AnalysisResult> solved = new ConcurrentHashMap<>();
-        Map<String, PackageRenderer.Member> done = new ConcurrentHashMap<>();
+        Map<String, CheckedMember> done = new ConcurrentHashMap<>();
         for (List<Job> level : LoadPath.levels(project)) {
             List<Done> outcomes = level.size() == 1 ? List.of(solve(reading, level.get(0), solved))
                     : level.parallelStream().map(m -> solve(reading, m, solved)).toList();
@@ -44,7 +44,7 @@ final class MemberSolver {
                 done.put(d.member().id(), d.member());
             }
         }
-        List<PackageRenderer.Member> members = project.members().stream().map(m -> done.get(m.member())).toList();
+        List<CheckedMember> members = project.members().stream().map(m -> done.get(m.member())).toList();
         List<CheckOutcome> checks = new ArrayList<>();
         members.forEach(m -> checks.addAll(m.checks()));
         return new Pipeline.Solved(null, checks, List.of(), Main.OK, members);
@@ -54,7 +54,7 @@ final class MemberSolver {
         String prefix = "member " + member.member() + ": ";
         try {
             AnalysisResult result = Analysis.run(org.beamfolio.selection.Selection.resolve(MemberLoads.withReactions(member, solved)));
-            return new Done(new PackageRenderer.Member(member.member(), result, Checks.run(result)), null);
+            return new Done(new CheckedMember(member.member(), result, Checks.run(result)), null);
         } catch (UnstableBeamException e) {
             Instability i = e.instability();
             return new Done(null, new Diagnostic(reading.file(), i.where(), i.keyPath(), prefix + i.message()));

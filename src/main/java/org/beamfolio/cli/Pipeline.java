@@ -1,5 +1,6 @@
 package org.beamfolio.cli;
 
+import org.beamfolio.checks.CheckedMember;
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
@@ -86,7 +87,7 @@ final class Pipeline {
      * {@code checks} holds them all.
      */
     record Solved(AnalysisResult result, List<CheckOutcome> checks, List<String> messages, int status,
-                  List<PackageRenderer.Member> members) {
+                  List<CheckedMember> members) {
         Solved(AnalysisResult result, List<CheckOutcome> checks, List<String> messages, int status) {
             this(result, checks, messages, status, List.of());
         }
@@ -111,7 +112,7 @@ final class Pipeline {
                 return Summary.of(result, checks);
             }
             StringBuilder out = new StringBuilder();
-            for (PackageRenderer.Member m : members) {
+            for (CheckedMember m : members) {
                 out.append("member ").append(m.id()).append('\n').append(Summary.of(m.result(), m.checks()));
             }
             return out.toString();
@@ -206,7 +207,7 @@ final class Pipeline {
      */
     Outcome combine(List<Path> files, String name, Path outDir, boolean csv) {
         List<String> messages = new ArrayList<>();
-        List<PackageRenderer.Member> members = new ArrayList<>();
+        List<CheckedMember> members = new ArrayList<>();
         List<CheckOutcome> checks = new ArrayList<>();
         java.util.Set<String> names = new java.util.HashSet<>();
         for (Path file : files) {
@@ -219,7 +220,7 @@ final class Pipeline {
                 messages.add(file + ": another job given is also named " + solved.name() + "; the members of one package need"
                         + " different names\n");
             } else {
-                members.add(new PackageRenderer.Member(solved.name(), solved.result(), solved.checks()));
+                members.add(new CheckedMember(solved.name(), solved.result(), solved.checks()));
                 checks.addAll(solved.checks());
             }
         }
@@ -240,15 +241,13 @@ final class Pipeline {
         Path results = outDir.resolve(name + ".results.json");
         byte[] document;
         try {
-            List<ResultsWriter.Member> forResults = solved.members().stream()
-                    .map(m -> new ResultsWriter.Member(m.id(), m.result(), m.checks())).toList();
-            byte[] json = ResultsWriter.writeMembers(sha256, forResults).getBytes(StandardCharsets.UTF_8);
+            byte[] json = ResultsWriter.writeMembers(sha256, solved.members()).getBytes(StandardCharsets.UTF_8);
             document = renderer.renderMembers(solved.members(), archival);
             Files.createDirectories(outDir);
             List<Path> targets = new ArrayList<>(List.of(results, pdf));
             List<byte[]> contents = new ArrayList<>(List.of(json, document));
             if (csv) {
-                for (PackageRenderer.Member m : solved.members()) {
+                for (CheckedMember m : solved.members()) {
                     targets.add(outDir.resolve(name + "." + m.id() + ".csv"));
                     contents.add(org.beamfolio.results.CsvExport.write(m.result()).getBytes(StandardCharsets.UTF_8));
                 }

@@ -20,6 +20,7 @@ import org.beamfolio.report.drawing.Chart;
 import org.beamfolio.report.drawing.Drawing;
 import org.beamfolio.report.pdf.PdfRenderer;
 import org.beamfolio.checks.CheckOutcome;
+import org.beamfolio.checks.CheckedMember;
 
 /**
  * The report stage's entry point: gathers the {@link ReportModel}, merges it into the FreeMarker
@@ -130,39 +131,34 @@ public final class PackageRenderer {
                 flag);
     }
 
-    /** One solved member of a job with members, for {@link #renderMembers}. */
-    public record Member(String id, AnalysisResult result, List<CheckOutcome> checks) {}
-
     /** The XHTML of a package of several members, before layout. */
-    public String membersXhtml(List<Member> members) {
+    public String membersXhtml(List<CheckedMember> members) {
         return xhtml(PROJECT_TEMPLATE, project(members).model());
     }
 
     /** One package of several members: cover, schedule, basis, each member's part, load path, sign-off, job file. */
-    public byte[] renderMembers(List<Member> members, boolean archival) {
+    public byte[] renderMembers(List<CheckedMember> members, boolean archival) {
         Built built = project(members);
         String xhtml = xhtml(PROJECT_TEMPLATE, built.model());
         var job = members.get(0).result().job();
         Map<String, PdfRenderer.Attachment> files = new java.util.LinkedHashMap<>();
-        for (Member m : members) {
+        for (CheckedMember m : members) {
             var source = m.result().job();
             files.putIfAbsent(source.name() + ".yaml", new PdfRenderer.Attachment(source.name() + ".yaml", source.sourceBytes(),
                     "Job file of this calculation package"));
         }
-        Map<String, List<CheckOutcome>> byMember = new java.util.LinkedHashMap<>();
-        members.forEach(m -> byMember.put(m.id(), m.checks()));
         return ready(pdf).render(xhtml, built.drawings(), List.copyOf(files.values()), job.project().date(), archival,
-                job.project().title(), org.beamfolio.checks.ChecksVerdict.ofMembers(byMember));
+                job.project().title(), org.beamfolio.checks.ChecksVerdict.ofMembers(members));
     }
 
     private record Built(ProjectModel model, Map<String, Drawing> drawings) {}
 
     /** Each member's part built as for a one-member package, its figures renamed under the member's prefix. */
-    private static Built project(List<Member> members) {
+    private static Built project(List<CheckedMember> members) {
         Map<String, Drawing> drawings = new java.util.LinkedHashMap<>();
         List<ProjectPart.Built> parts = new java.util.ArrayList<>();
         for (int i = 0; i < members.size(); i++) {
-            Member m = members.get(i);
+            CheckedMember m = members.get(i);
             ReportModelBuilder.Built built = new ReportModelBuilder(m.result()).build(m.checks());
             for (Map.Entry<String, Drawing> d : built.drawings().entrySet()) {
                 // the basis and the cover are printed once, with the first member's sketches

@@ -14,6 +14,7 @@ import org.beamfolio.analysis.Extremes;
 import org.beamfolio.analysis.ReactionEnvelope;
 import org.beamfolio.analysis.Response;
 import org.beamfolio.checks.CheckOutcome;
+import org.beamfolio.checks.CheckedMember;
 import org.beamfolio.model.Support;
 import org.beamfolio.section.SectionProperties;
 import org.beamfolio.units.ReportUnits;
@@ -41,16 +42,13 @@ public final class ResultsWriter {
         return text + "\n";
     }
 
-    /** One solved member of a job with members, with its checks. */
-    public record Member(String id, AnalysisResult result, List<CheckOutcome> checks) {}
-
     /**
      * The results file of a job with members: the format, the tool and the input's digest once,
      * then under {@code members} each member's results exactly as a single-beam job's, with its id.
      * A package gathered from several job files ({@code sha256} null) gives each member its own
      * file's digest instead.
      */
-    public static String writeMembers(String sha256, List<Member> members) {
+    public static String writeMembers(String sha256, List<CheckedMember> members) {
         StringWriter text = new StringWriter();
         try (JsonGenerator g = JSON.createGenerator(text)) {
             g.useDefaultPrettyPrinter();
@@ -61,7 +59,7 @@ public final class ResultsWriter {
                 g.writeStringField("input_sha256", sha256);
             }
             g.writeArrayFieldStart("members");
-            for (Member m : members) {
+            for (CheckedMember m : members) {
                 g.writeStartObject();
                 g.writeStringField("id", m.id());
                 if (sha256 == null) {

@@ -1,5 +1,6 @@
 package org.beamfolio.cli;
 
+import org.beamfolio.checks.CheckedMember;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
@@ -17,7 +18,6 @@ import org.beamfolio.job.Diagnostic;
 import org.beamfolio.job.JobReader;
 import org.beamfolio.job.JobReading;
 import org.beamfolio.model.Load;
-import org.beamfolio.report.PackageRenderer;
 import org.beamfolio.units.Units;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -65,7 +65,7 @@ class MembersJobTest {
         return JobReader.read("job.yaml", "job", text.getBytes(StandardCharsets.UTF_8));
     }
 
-    static PackageRenderer.Member member(Pipeline.Solved solved, String id) {
+    static CheckedMember member(Pipeline.Solved solved, String id) {
         return solved.members().stream().filter(m -> m.id().equals(id)).findFirst().orElseThrow();
     }
 
@@ -80,7 +80,7 @@ class MembersJobTest {
         assertEquals(List.of("J-1", "B-1", "G-1"), reading.project().order(), "each member after the members it carries");
         Pipeline.Solved solved = MemberSolver.solve(reading);
         assertEquals(Main.OK, solved.status(), () -> String.join("", solved.messages()));
-        assertEquals(List.of("G-1", "J-1", "B-1"), solved.members().stream().map(PackageRenderer.Member::id).toList(),
+        assertEquals(List.of("G-1", "J-1", "B-1"), solved.members().stream().map(CheckedMember::id).toList(),
                 "the package keeps the written order");
 
         // J-1, by hand: w_D = 15 psf x 16/12 ft = 20 lb/ft, w_L = 40 x 16/12 = 53.33 lb/ft over 12 ft;
