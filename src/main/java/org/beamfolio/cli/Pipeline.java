@@ -6,7 +6,9 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 import org.beamfolio.analysis.Analysis;
 import org.beamfolio.analysis.AnalysisResult;
 import org.beamfolio.analysis.Instability;
@@ -175,30 +177,18 @@ final class Pipeline {
                 return new Outcome(before.status(), messages);
             }
         }
-        String name = solved.result().job().name();
-        Path pdf = outDir.resolve(name + ".pdf");
-        Path results = outDir.resolve(name + ".results.json");
-        List<String> messages = new ArrayList<>();
-        byte[] document;
-        try {
-            byte[] json = ResultsWriter.write(solved.result(), solved.checks()).getBytes(StandardCharsets.UTF_8);
-            PreviousRevision previousRevision = before == null ? null : new PreviousRevision(before.result(), before.checks(),
-                    RevisionInputs.between(before.result().job().sourceText(), solved.result().job().sourceText()));
-            document = renderer.render(solved.result(), solved.checks(), previousRevision, archival);
-            Files.createDirectories(outDir);
-            List<Path> targets = new ArrayList<>(List.of(results, pdf));
-            List<byte[]> contents = new ArrayList<>(List.of(json, document));
+        Solved earlier = before;
+        String name = solved.name();
+        return writeAll(file, outDir, name, solved.checks(), failing(solved.checks(), ""), () -> {
+            PreviousRevision previousRevision = earlier == null ? null : new PreviousRevision(earlier.result(), earlier.checks(),
+                    RevisionInputs.between(earlier.result().job().sourceText(), solved.result().job().sourceText()));
+            Map<String, byte[]> csvs = new LinkedHashMap<>();
             if (csv) {
-                targets.add(outDir.resolve(name + ".csv"));
-                contents.add(org.beamfolio.results.CsvExport.write(solved.result()).getBytes(StandardCharsets.UTF_8));
+                csvs.put(name + ".csv", org.beamfolio.results.CsvExport.write(solved.result()).getBytes(StandardCharsets.UTF_8));
             }
-            AtomicFiles.writeTogether(targets, contents);
-        } catch (IOException | RuntimeException e) {
-            messages.add(file + ": internal failure while writing the package: " + e + "\n"
-                    + "  nothing was written; an earlier package of the same name is unchanged\n");
-            return new Outcome(Main.INTERNAL_FAILURE, messages);
-        }
-        return finished(file, solved.checks(), failing(solved.checks(), ""), pdf, results, document);
+            return new PackageFiles(ResultsWriter.write(solved.result(), solved.checks()).getBytes(StandardCharsets.UTF_8),
+                    renderer.render(solved.result(), solved.checks(), previousRevision, archival), csvs);
+        });
     }
 
     /**
@@ -237,29 +227,52 @@ final class Pipeline {
      * @param sha256 the job file's digest, or null for jobs gathered from several files
      */
     private Outcome writeMembers(Path file, Solved solved, String name, String sha256, Path outDir, boolean csv) {
-        Path pdf = outDir.resolve(name + ".pdf");
-        Path results = outDir.resolve(name + ".results.json");
-        byte[] document;
-        try {
-            byte[] json = ResultsWriter.writeMembers(sha256, solved.members()).getBytes(StandardCharsets.UTF_8);
-            document = renderer.renderMembers(solved.members(), archival);
-            Files.createDirectories(outDir);
-            List<Path> targets = new ArrayList<>(List.of(results, pdf));
-            List<byte[]> contents = new ArrayList<>(List.of(json, document));
+        List<String> failing = new ArrayList<>();
+        solved.members().forEach(m -> failing.addAll(failing(m.checks(), m.id() + "/")));
+        return writeAll(file, outDir, name, solved.checks(), failing, () -> {
+            Map<String, byte[]> csvs = new LinkedHashMap<>();
             if (csv) {
                 for (CheckedMember m : solved.members()) {
-                    targets.add(outDir.resolve(name + "." + m.id() + ".csv"));
-                    contents.add(org.beamfolio.results.CsvExport.write(m.result()).getBytes(StandardCharsets.UTF_8));
+                    csvs.put(name + "." + m.id() + ".csv", org.beamfolio.results.CsvExport.write(m.result()).getBytes(StandardCharsets.UTF_8));
                 }
             }
+            return new PackageFiles(ResultsWriter.writeMembers(sha256, solved.members()).getBytes(StandardCharsets.UTF_8),
+                    renderer.renderMembers(solved.members(), archival), csvs);
+        });
+    }
+
+    /** A package's files, made in memory before any is written: results, PDF, and CSV files by name. */
+    private record PackageFiles(byte[] results, byte[] pdf, Map<String, byte[]> csvs) {}
+
+    /** Something that makes a package's files in memory. */
+    private interface PackageMaker {
+        PackageFiles make() throws IOException;
+    }
+
+    /**
+     * Makes a package's files and moves them into place together as {@code name}.pdf,
+     * {@code name}.results.json and its CSV files; on a failure nothing is written.
+     */
+    private Outcome writeAll(Path file, Path outDir, String name, List<CheckOutcome> checks, List<String> failing,
+                             PackageMaker maker) {
+        Path pdf = outDir.resolve(name + ".pdf");
+        Path results = outDir.resolve(name + ".results.json");
+        PackageFiles made;
+        try {
+            made = maker.make();
+            Files.createDirectories(outDir);
+            List<Path> targets = new ArrayList<>(List.of(results, pdf));
+            List<byte[]> contents = new ArrayList<>(List.of(made.results(), made.pdf()));
+            made.csvs().forEach((csvName, bytes) -> {
+                targets.add(outDir.resolve(csvName));
+                contents.add(bytes);
+            });
             AtomicFiles.writeTogether(targets, contents);
         } catch (IOException | RuntimeException e) {
             return new Outcome(Main.INTERNAL_FAILURE, List.of(file + ": internal failure while writing the package: " + e + "\n"
                     + "  nothing was written; an earlier package of the same name is unchanged\n"));
         }
-        List<String> failing = new ArrayList<>();
-        solved.members().forEach(m -> failing.addAll(failing(m.checks(), m.id() + "/")));
-        return finished(file, solved.checks(), failing, pdf, results, document);
+        return finished(file, checks, failing, pdf, results, made.pdf());
     }
 
     /** Each check that does not meet its limit, named (under its member's id in a package of several) with its ratio. */
