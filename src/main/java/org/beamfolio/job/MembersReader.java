@@ -131,6 +131,12 @@ final class MembersReader {
             if (id == null) {
                 continue;
             }
+            if (!id.matches("[A-Za-z0-9][A-Za-z0-9._-]*")) {
+                // the id names the member's sheets, anchors and CSV file
+                context.error(idNode, f.path("id"), "a member id is letters, digits, '.', '-' and '_' (like J-1 or B2.1),"
+                        + " starting with a letter or digit; got \"" + id + "\"");
+                continue;
+            }
             if (seen.containsKey(id)) {
                 context.error(idNode, f.path("id"), "member \"" + id + "\" is given twice (first at line "
                         + seen.get(id).location().line() + "): each member needs its own id");

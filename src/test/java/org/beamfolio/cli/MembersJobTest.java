@@ -177,6 +177,19 @@ class MembersJobTest {
     }
 
     @Test
+    void aMemberIdThatCannotNameAFileIsBadInput() {
+        JobReading reading = read(HEADER + """
+                members:
+                  - id: B/1
+                    beam: { length: 10 ft, section: s, material: m, supports: [ { at: 0 ft, type: pin }, { at: 10 ft, type: roller } ] }
+                    loads: [ { type: area, load: floor, width: 4 ft } ]
+                """);
+        Diagnostic d = only(reading);
+        assertEquals("members[0].id", d.keyPath());
+        assertTrue(d.message().startsWith("a member id is letters, digits"), d.message());
+    }
+
+    @Test
     void aReactionLoadInASingleBeamJobIsBadInput() {
         JobReading reading = read(HEADER + """
                 beam: { length: 10 ft, section: s, material: m, supports: [ { at: 0 ft, type: pin }, { at: 10 ft, type: roller } ] }
